@@ -1,0 +1,14 @@
+import { json, readJson, route } from "@/lib/http/handler";
+import { signInSchema } from "@/lib/validation/auth";
+import { signIn } from "@/lib/auth/service";
+
+export const runtime = "nodejs";
+export const dynamic = "force-dynamic";
+
+export const POST = route("POST /api/auth/sign-in", async ({ req }) => {
+  const input = await readJson(req, signInSchema);
+  const { userId, cookie } = await signIn(input);
+  const res = json({ user: { id: userId, email: input.email } });
+  res.cookies.set(cookie.name, cookie.value, cookie.attributes);
+  return res;
+});

@@ -1,0 +1,24 @@
+// The access table: every API route and method with the roles allowed. The guards read it; the role-matrix test
+// checks every route file against it.
+import { ALL_ROLES, LEAD_ONLY, type Role } from "@/lib/auth/roles";
+
+/** "public": no sign-in; "user": any signed-in person (no team role needed); otherwise the team roles allowed. */
+export type Access = "public" | "user" | readonly Role[];
+
+export const ROUTE_ACCESS = {
+  "GET /api/health": "public",
+  "POST /api/auth/sign-up": "public",
+  "POST /api/auth/sign-in": "public",
+  "POST /api/auth/sign-out": "user",
+  "GET /api/me": "user",
+  "GET /api/projects": ALL_ROLES,
+  "POST /api/projects": LEAD_ONLY,
+  "GET /api/projects/[projectId]": ALL_ROLES,
+  "GET /api/projects/[projectId]/runs": ALL_ROLES,
+} as const satisfies Record<string, Access>;
+
+export type RouteKey = keyof typeof ROUTE_ACCESS;
+
+export function accessFor(key: RouteKey): Access {
+  return ROUTE_ACCESS[key];
+}

@@ -1,0 +1,35 @@
+// The one migration and seed runner: a static list, so the CLI script, the app and vitest all load the same files.
+import type { Knex } from "knex";
+import * as core from "@/db/migrations/20261201000001_core";
+import * as demo from "@/db/seeds/01_demo";
+
+type Migration = { up: (k: Knex) => Promise<void>; down: (k: Knex) => Promise<void> };
+
+// Names keep the .ts suffix so the knex_migrations rows match what the knex CLI writes.
+const MIGRATIONS: Record<string, Migration> = {
+  "20261201000001_core.ts": core,
+};
+
+export const migrationSource: Knex.MigrationSource<string> = {
+  getMigrations: async () => Object.keys(MIGRATIONS),
+  getMigrationName: (name) => name,
+  getMigration: async (name) => {
+    const m = MIGRATIONS[name];
+    if (!m) throw new Error(`unknown migration ${name}`);
+    return m;
+  },
+};
+
+export async function migrateLatest(knex: Knex): Promise<string[]> {
+  const [, names] = (await knex.migrate.latest({ migrationSource })) as [number, string[]];
+  return names;
+}
+
+export async function rollbackAll(knex: Knex): Promise<void> {
+  await knex.migrate.rollback({ migrationSource }, true);
+}
+
+/** Seeds the demo scenario when the database holds no users; returns whether it seeded. */
+export async function seedDemo(knex: Knex): Promise<boolean> {
+  return demo.seedIfEmpty(knex);
+}

@@ -1,0 +1,8 @@
+// knex and highs must stay outside the server bundle (STACK.md §3); pdfkit too, in case of a downgrade.
+/** @type {import('next').NextConfig} */
+const nextConfig = {
+  serverExternalPackages: ["knex", "highs", "pdfkit", "exceljs", "smtp-server", "mailparser", "bwip-js"],
+  poweredByHeader: false,
+  reactStrictMode: true,
+};
+export default nextConfig;
