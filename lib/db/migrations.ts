@@ -1,6 +1,7 @@
 // The one migration and seed runner: a static list, so the CLI script, the app and vitest all load the same files.
 import type { Knex } from "knex";
 import * as core from "@/db/migrations/20261201000001_core";
+import * as audit from "@/db/migrations/20261201000002_audit";
 import * as demo from "@/db/seeds/01_demo";
 
 type Migration = { up: (k: Knex) => Promise<void>; down: (k: Knex) => Promise<void> };
@@ -8,6 +9,7 @@ type Migration = { up: (k: Knex) => Promise<void>; down: (k: Knex) => Promise<vo
 // Names keep the .ts suffix so the knex_migrations rows match what the knex CLI writes.
 const MIGRATIONS: Record<string, Migration> = {
   "20261201000001_core.ts": core,
+  "20261201000002_audit.ts": audit,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {
