@@ -4,5 +4,7 @@ const nextConfig = {
   serverExternalPackages: ["knex", "highs", "pdfkit", "exceljs", "smtp-server", "mailparser", "bwip-js"],
   poweredByHeader: false,
   reactStrictMode: true,
+  // `npm test` runs `tsc --noEmit` as its own step; the build does not type-check a second time.
+  typescript: { ignoreBuildErrors: true },
 };
 export default nextConfig;

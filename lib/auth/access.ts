@@ -14,7 +14,14 @@ export const ROUTE_ACCESS = {
   "GET /api/projects": ALL_ROLES,
   "POST /api/projects": LEAD_ONLY,
   "GET /api/projects/[projectId]": ALL_ROLES,
+  "PATCH /api/projects/[projectId]": LEAD_ONLY,
+  "DELETE /api/projects/[projectId]": LEAD_ONLY,
   "GET /api/projects/[projectId]/runs": ALL_ROLES,
+  "POST /api/projects/[projectId]/runs": LEAD_ONLY,
+  "GET /api/projects/[projectId]/runs/[runId]": ALL_ROLES,
+  // Builders and technicians may change a run's state only; the service checks which fields each role sends.
+  "PATCH /api/projects/[projectId]/runs/[runId]": ALL_ROLES,
+  "DELETE /api/projects/[projectId]/runs/[runId]": LEAD_ONLY,
 } as const satisfies Record<string, Access>;
 
 export type RouteKey = keyof typeof ROUTE_ACCESS;

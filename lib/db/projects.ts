@@ -1,5 +1,5 @@
 // Projects, always scoped by team.
-import { db, type Db } from "@/lib/db/knex";
+import { db, type Db, type Tx } from "@/lib/db/knex";
 import type { GaugeSystem, ProjectSettings } from "@/lib/domain/types";
 
 export interface ProjectRecord extends ProjectSettings {
@@ -80,4 +80,62 @@ export function settingsOf(p: ProjectRecord): ProjectSettings {
     keepRemnantMm: p.keepRemnantMm,
     markerRepeatMm: p.markerRepeatMm,
   };
+}
+
+export interface ProjectWrite {
+  name?: string;
+  wireIdPrefix?: string;
+  supplyV?: number;
+  conductorTempC?: number;
+  gaugeSystem?: GaugeSystem;
+  slackPct?: number;
+  slackMinMm?: number;
+  serviceLoopMm?: number;
+  roundingMm?: number;
+  endDiscardMm?: number;
+  keepRemnantMm?: number;
+  markerRepeatMm?: number | null;
+  defaultDropClass?: string;
+  archivedAt?: Date | null;
+}
+
+export async function insertProject(
+  tx: Tx,
+  teamId: string,
+  data: ProjectWrite & { name: string },
+): Promise<string> {
+  const [row] = (await tx("project")
+    .insert({ ...data, teamId })
+    .returning("id")) as [{ id: string }];
+  return row.id;
+}
+
+/** Updates only if the stored version is still `version`; returns false on a stale version. */
+export async function updateProjectIfVersion(
+  tx: Tx,
+  teamId: string,
+  projectId: string,
+  version: number,
+  data: ProjectWrite,
+): Promise<boolean> {
+  const n = await tx("project")
+    .where({ id: projectId, teamId, version })
+    .update({ ...data, version: version + 1, updatedAt: tx.fn.now() });
+  return Number(n) === 1;
+}
+
+export async function projectNameTaken(
+  q: Db,
+  teamId: string,
+  name: string,
+  exceptId?: string,
+): Promise<boolean> {
+  const row = await q("project")
+    .where({ teamId })
+    .whereRaw("lower(name) = lower(?)", [name])
+    .modify((b) => {
+      if (exceptId) b.whereNot("id", exceptId);
+    })
+    .first("id");
+  return Boolean(row);
 }

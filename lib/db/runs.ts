@@ -1,5 +1,5 @@
 // Runs of a project, always reached through a project of the caller's team.
-import { db, type Db } from "@/lib/db/knex";
+import { db, type Db, type Tx } from "@/lib/db/knex";
 import type { BenchState, RunData } from "@/lib/domain/types";
 import type { RunListQuery } from "@/lib/validation/runs";
 import type { Page } from "@/lib/validation/common";
@@ -51,6 +51,8 @@ const RUN_COLUMNS = [
   "updatedAt",
 ] as const;
 
+export const RUN_SELECT = RUN_COLUMNS.map((c) => `r.${c}`);
+
 function scoped(q: Db, teamId: string, projectId: string) {
   return q("run as r")
     .join("project as p", "p.id", "r.projectId")
@@ -81,7 +83,7 @@ export async function listRuns(
   const [countRow] = (await base.clone().count({ total: "*" })) as [{ total: number }];
   const items = (await base
     .clone()
-    .select(RUN_COLUMNS.map((c) => `r.${c}`))
+    .select(RUN_SELECT)
     .orderBy(`r.${query.sort}`, query.dir)
     .orderBy("r.wireId", "asc")
     .limit(query.limit)
@@ -90,7 +92,76 @@ export async function listRuns(
 }
 
 export async function listAllRuns(teamId: string, projectId: string, q: Db = db()): Promise<RunRecord[]> {
-  return (await scoped(q, teamId, projectId)
-    .select(RUN_COLUMNS.map((c) => `r.${c}`))
-    .orderBy("r.wireId", "asc")) as RunRecord[];
+  return (await scoped(q, teamId, projectId).select(RUN_SELECT).orderBy("r.wireId", "asc")) as RunRecord[];
+}
+
+export async function getRun(teamId: string, projectId: string, runId: string, q: Db = db()) {
+  const row = (await scoped(q, teamId, projectId).where("r.id", runId).select(RUN_SELECT).first()) as
+    RunRecord | undefined;
+  return row ?? null;
+}
+
+export async function getRunForUpdate(tx: Tx, teamId: string, projectId: string, runId: string) {
+  const row = (await scoped(tx, teamId, projectId)
+    .where("r.id", runId)
+    .select(RUN_SELECT)
+    .forUpdate("r")
+    .first()) as RunRecord | undefined;
+  return row ?? null;
+}
+
+export async function wireIdsWithPrefix(tx: Db, projectId: string, prefix: string): Promise<string[]> {
+  const like = `${prefix.replace(/[%_\\]/g, (c) => `\\${c}`)}%`;
+  const rows = (await tx("run").where("projectId", projectId).whereLike("wireId", like).select("wireId")) as {
+    wireId: string;
+  }[];
+  return rows.map((r) => r.wireId);
+}
+
+export async function existingWireIds(tx: Db, projectId: string, wireIds: string[]): Promise<string[]> {
+  if (wireIds.length === 0) return [];
+  const rows = (await tx("run")
+    .where("projectId", projectId)
+    .whereIn("wireId", wireIds)
+    .select("wireId")) as {
+    wireId: string;
+  }[];
+  return rows.map((r) => r.wireId);
+}
+
+export type RunInsert = RunData & { traceCode: string };
+
+export async function insertRuns(tx: Tx, projectId: string, runs: RunInsert[]): Promise<RunRecord[]> {
+  const out: RunRecord[] = [];
+  for (let i = 0; i < runs.length; i += 500) {
+    const chunk = runs.slice(i, i + 500).map((r) => ({ ...r, projectId }));
+    out.push(
+      ...((await tx("run")
+        .insert(chunk)
+        .returning(RUN_COLUMNS as unknown as string[])) as RunRecord[]),
+    );
+  }
+  return out;
+}
+
+/** Writes the changed fields and bumps the version, only if the stored version is still `version`. */
+export async function updateRunIfVersion(
+  tx: Tx,
+  runId: string,
+  version: number,
+  changes: Partial<RunData> & { state?: string },
+): Promise<RunRecord | null> {
+  const rows = (await tx("run")
+    .where({ id: runId, version })
+    .update({ ...changes, version: version + 1, updatedAt: tx.fn.now() })
+    .returning(RUN_COLUMNS as unknown as string[])) as RunRecord[];
+  return rows[0] ?? null;
+}
+
+export async function deleteRunRow(tx: Tx, runId: string): Promise<void> {
+  await tx("run").where({ id: runId }).delete();
+}
+
+export async function touchProject(tx: Tx, projectId: string): Promise<void> {
+  await tx("project").where({ id: projectId }).update({ updatedAt: tx.fn.now() });
 }

@@ -1,7 +1,8 @@
-import { readQuery, route } from "@/lib/http/handler";
+import { json, readJson, readQuery, route } from "@/lib/http/handler";
 import { requireProject } from "@/lib/services/projects";
+import { createRuns } from "@/lib/services/runs";
 import { listRuns } from "@/lib/db/runs";
-import { runListQuerySchema } from "@/lib/validation/runs";
+import { runCreateBodySchema, runListQuerySchema } from "@/lib/validation/runs";
 
 export const runtime = "nodejs";
 export const dynamic = "force-dynamic";
@@ -10,4 +11,12 @@ export const GET = route("GET /api/projects/[projectId]/runs", async ({ me, para
   const project = await requireProject(me.teamId, params.projectId);
   const query = readQuery(req, runListQuerySchema);
   return listRuns(me.teamId, project.id, query);
+});
+
+/** One run, or `{ runs: [...] }` for many, in one transaction. */
+export const POST = route("POST /api/projects/[projectId]/runs", async ({ me, params, req }) => {
+  const project = await requireProject(me.teamId, params.projectId);
+  const { many, runs } = await readJson(req, runCreateBodySchema);
+  const created = await createRuns(me, project, runs);
+  return json(many ? { items: created, total: created.length } : created[0], 201);
 });

@@ -1,0 +1,154 @@
+// Creating, editing and deleting runs: wire-ID generation, version checks, role limits on fields, audit events.
+import { randomBytes } from "node:crypto";
+import { db } from "@/lib/db/knex";
+import { recordAudit, recordAudits } from "@/lib/db/audit";
+import {
+  deleteRunRow,
+  existingWireIds,
+  getRunForUpdate,
+  insertRuns,
+  touchProject,
+  updateRunIfVersion,
+  wireIdsWithPrefix,
+  type RunInsert,
+  type RunRecord,
+} from "@/lib/db/runs";
+import type { ProjectRecord } from "@/lib/db/projects";
+import type { TeamMe } from "@/lib/auth/guards";
+import type { Role } from "@/lib/auth/roles";
+import { traceCodeFromBytes } from "@/lib/domain/trace-code";
+import type { BenchState, RunData } from "@/lib/domain/types";
+import { conflict, forbidden, invalid, notFound } from "@/lib/http/errors";
+import { runRuleIssues, type RunCreateInput, type RunPatchInput } from "@/lib/validation/runs";
+
+/** Next free wire IDs for a prefix: the highest number already used after the prefix, plus one, zero-padded. */
+export function nextWireIds(prefix: string, taken: Iterable<string>, count: number): string[] {
+  let max = 0;
+  let width = 3;
+  for (const id of taken) {
+    if (!id.startsWith(prefix)) continue;
+    const m = /^(\d+)$/.exec(id.slice(prefix.length));
+    if (!m) continue;
+    max = Math.max(max, Number(m[1]));
+    width = Math.max(width, m[1]!.length);
+  }
+  return Array.from({ length: count }, (_, i) => `${prefix}${String(max + i + 1).padStart(width, "0")}`);
+}
+
+export async function createRuns(
+  me: TeamMe,
+  project: ProjectRecord,
+  inputs: RunCreateInput[],
+): Promise<RunRecord[]> {
+  return db().transaction(async (tx) => {
+    const given = inputs.map((r) => r.wireId).filter((w): w is string => Boolean(w));
+    const dupInBody = given.filter((w, i) => given.indexOf(w) !== i);
+    if (dupInBody.length) {
+      throw conflict(`Wire ID ${dupInBody[0]} appears more than once.`, { wireIds: [...new Set(dupInBody)] });
+    }
+    const clash = await existingWireIds(tx, project.id, given);
+    if (clash.length)
+      throw conflict(`Wire ID ${clash[0]} is already used in this project.`, { wireIds: clash });
+
+    const blanks = inputs.filter((r) => !r.wireId).length;
+    const taken = new Set([...(await wireIdsWithPrefix(tx, project.id, project.wireIdPrefix)), ...given]);
+    const fresh = nextWireIds(project.wireIdPrefix, taken, blanks);
+    let k = 0;
+    const rows: RunInsert[] = inputs.map((r) => ({
+      ...r,
+      wireId: r.wireId ?? fresh[k++]!,
+      traceCode: traceCodeFromBytes(randomBytes(5)),
+    }));
+    const created = await insertRuns(tx, project.id, rows);
+    await recordAudits(
+      tx,
+      created.map((r) => ({
+        teamId: me.teamId,
+        actorUserId: me.user.id,
+        action: "run.create",
+        entityType: "run",
+        entityId: r.id,
+        detail: { projectId: project.id, wireId: r.wireId },
+      })),
+    );
+    await touchProject(tx, project.id);
+    return created;
+  });
+}
+
+const BUILDER_STATES: readonly BenchState[] = ["planned", "cut", "marked", "terminated"];
+const TECHNICIAN_STATES: readonly BenchState[] = ["terminated", "tested", "failed"];
+
+/** Which fields each role may change on a run (PRODUCT.md §2): the lead any; builders and technicians the state. */
+function checkFieldsForRole(role: Role, input: RunPatchInput): void {
+  if (role === "lead") return;
+  const fields = Object.keys(input).filter((k) => k !== "version");
+  const extra = fields.filter((f) => f !== "state");
+  if (extra.length) throw forbidden(`Your role may not change ${extra.join(", ")}.`);
+  const allowed = role === "builder" ? BUILDER_STATES : TECHNICIAN_STATES;
+  if (input.state && !allowed.includes(input.state)) {
+    throw forbidden(`Your role may not set a run to "${input.state}".`);
+  }
+}
+
+export async function patchRun(
+  me: TeamMe,
+  project: ProjectRecord,
+  runId: string,
+  input: RunPatchInput,
+): Promise<RunRecord> {
+  checkFieldsForRole(me.role, input);
+  return db().transaction(async (tx) => {
+    const current = await getRunForUpdate(tx, me.teamId, project.id, runId);
+    if (!current) throw notFound("That run");
+    if (current.version !== input.version) {
+      throw conflict("Someone else changed this run since you opened it. Here is the current record.", {
+        current,
+      });
+    }
+    const { version, ...changes } = input;
+    const merged = { ...current, ...changes };
+    const issues = runRuleIssues(merged);
+    if (issues.length) throw invalid(`Invalid input: ${issues[0]!.path}: ${issues[0]!.message}`, issues);
+    if (changes.wireId && changes.wireId !== current.wireId) {
+      const clash = await existingWireIds(tx, project.id, [changes.wireId]);
+      if (clash.length) throw conflict(`Wire ID ${changes.wireId} is already used in this project.`);
+    }
+    const changed: Record<string, { from: unknown; to: unknown }> = {};
+    for (const [k, v] of Object.entries(changes)) {
+      const before = current[k as keyof RunRecord];
+      if (before !== v) changed[k] = { from: before, to: v };
+    }
+    const updated = await updateRunIfVersion(tx, runId, version, changes as Partial<RunData>);
+    if (!updated) {
+      throw conflict("Someone else changed this run since you opened it.", { current });
+    }
+    await recordAudit(tx, {
+      teamId: me.teamId,
+      actorUserId: me.user.id,
+      action: changes.state && Object.keys(changed).length === 1 ? "run.state" : "run.update",
+      entityType: "run",
+      entityId: runId,
+      detail: { projectId: project.id, wireId: updated.wireId, changed },
+    });
+    await touchProject(tx, project.id);
+    return updated;
+  });
+}
+
+export async function deleteRun(me: TeamMe, project: ProjectRecord, runId: string): Promise<void> {
+  await db().transaction(async (tx) => {
+    const current = await getRunForUpdate(tx, me.teamId, project.id, runId);
+    if (!current) throw notFound("That run");
+    await deleteRunRow(tx, runId);
+    await recordAudit(tx, {
+      teamId: me.teamId,
+      actorUserId: me.user.id,
+      action: "run.delete",
+      entityType: "run",
+      entityId: runId,
+      detail: { projectId: project.id, wireId: current.wireId, run: current },
+    });
+    await touchProject(tx, project.id);
+  });
+}
