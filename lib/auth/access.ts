@@ -18,6 +18,7 @@ export const ROUTE_ACCESS = {
   "DELETE /api/projects/[projectId]": LEAD_ONLY,
   "GET /api/projects/[projectId]/runs": ALL_ROLES,
   "POST /api/projects/[projectId]/runs": LEAD_ONLY,
+  "POST /api/projects/[projectId]/runs/bulk": ALL_ROLES,
   "GET /api/projects/[projectId]/runs/[runId]": ALL_ROLES,
   // Builders and technicians may change a run's state only; the service checks which fields each role sends.
   "PATCH /api/projects/[projectId]/runs/[runId]": ALL_ROLES,

@@ -165,3 +165,28 @@ export async function deleteRunRow(tx: Tx, runId: string): Promise<void> {
 export async function touchProject(tx: Tx, projectId: string): Promise<void> {
   await tx("project").where({ id: projectId }).update({ updatedAt: tx.fn.now() });
 }
+
+/** Locks the given runs of a project (in id order, so two bulk edits cannot deadlock). */
+export async function lockRuns(
+  tx: Tx,
+  teamId: string,
+  projectId: string,
+  ids: string[],
+): Promise<RunRecord[]> {
+  return (await scoped(tx, teamId, projectId)
+    .whereIn("r.id", ids)
+    .select(RUN_SELECT)
+    .orderBy("r.id")
+    .forUpdate("r")) as RunRecord[];
+}
+
+export async function updateRunsBulk(
+  tx: Tx,
+  ids: string[],
+  changes: Partial<RunData> & { state?: string },
+): Promise<RunRecord[]> {
+  return (await tx("run")
+    .whereIn("id", ids)
+    .update({ ...changes, version: tx.raw("version + 1"), updatedAt: tx.fn.now() })
+    .returning(RUN_COLUMNS as unknown as string[])) as RunRecord[];
+}

@@ -7,6 +7,8 @@ import {
   existingWireIds,
   getRunForUpdate,
   insertRuns,
+  lockRuns,
+  updateRunsBulk,
   touchProject,
   updateRunIfVersion,
   wireIdsWithPrefix,
@@ -19,7 +21,12 @@ import type { Role } from "@/lib/auth/roles";
 import { traceCodeFromBytes } from "@/lib/domain/trace-code";
 import type { BenchState, RunData } from "@/lib/domain/types";
 import { conflict, forbidden, invalid, notFound } from "@/lib/http/errors";
-import { runRuleIssues, type RunCreateInput, type RunPatchInput } from "@/lib/validation/runs";
+import {
+  runRuleIssues,
+  type RunBulkPatchInput,
+  type RunCreateInput,
+  type RunPatchInput,
+} from "@/lib/validation/runs";
 
 /** Next free wire IDs for a prefix: the highest number already used after the prefix, plus one, zero-padded. */
 export function nextWireIds(prefix: string, taken: Iterable<string>, count: number): string[] {
@@ -150,5 +157,43 @@ export async function deleteRun(me: TeamMe, project: ProjectRecord, runId: strin
       detail: { projectId: project.id, wireId: current.wireId, run: current },
     });
     await touchProject(tx, project.id);
+  });
+}
+
+/** Applies the same changes to many runs at once: all or none, refused with 409 if any run changed meanwhile. */
+export async function bulkPatchRuns(
+  me: TeamMe,
+  project: ProjectRecord,
+  input: RunBulkPatchInput,
+): Promise<RunRecord[]> {
+  checkFieldsForRole(me.role, { version: 1, ...input.changes } as RunPatchInput);
+  return db().transaction(async (tx) => {
+    const ids = [...new Set(input.items.map((i) => i.id))];
+    const current = await lockRuns(tx, me.teamId, project.id, ids);
+    if (current.length !== ids.length) throw notFound("One of the selected runs");
+    const seen = new Map(input.items.map((i) => [i.id, i.version]));
+    const stale = current.filter((r) => seen.get(r.id) !== r.version);
+    if (stale.length) {
+      throw conflict(
+        `${stale.length} of the selected runs changed since you loaded them; nothing was changed.`,
+        {
+          current: stale,
+        },
+      );
+    }
+    const updated = await updateRunsBulk(tx, ids, input.changes as Partial<RunData>);
+    await recordAudits(
+      tx,
+      updated.map((r) => ({
+        teamId: me.teamId,
+        actorUserId: me.user.id,
+        action: "run.bulk-update",
+        entityType: "run",
+        entityId: r.id,
+        detail: { projectId: project.id, wireId: r.wireId, changes: input.changes },
+      })),
+    );
+    await touchProject(tx, project.id);
+    return updated;
   });
 }

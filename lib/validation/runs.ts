@@ -191,3 +191,20 @@ export const runPatchSchema = runFieldsObject.partial().extend({
   state: z.enum(BENCH_STATES).optional(),
 });
 export type RunPatchInput = z.infer<typeof runPatchSchema>;
+
+/** Bulk edit of selected runs: every run with the version it was seen at, and the same changes for all. */
+export const runBulkPatchSchema = z.object({
+  items: z
+    .array(z.object({ id: z.uuid(), version: z.coerce.number().int().min(1) }))
+    .min(1)
+    .max(5000),
+  changes: z
+    .object({
+      gauge: gaugeSchema.optional(),
+      colour: colourSchema.optional(),
+      insulation: optText(60).optional(),
+      state: z.enum(BENCH_STATES).optional(),
+    })
+    .refine((c) => Object.keys(c).length > 0, { message: "Choose at least one field to change" }),
+});
+export type RunBulkPatchInput = z.infer<typeof runBulkPatchSchema>;

@@ -5,7 +5,7 @@ import { requirePageRole } from "@/lib/auth/guards";
 import { ALL_ROLES } from "@/lib/auth/roles";
 import { getProject } from "@/lib/db/projects";
 import { uuidSchema } from "@/lib/validation/common";
-import { RunsTable } from "@/components/runs/runs-table";
+import { RunsWorkspace } from "@/components/runs/runs-workspace";
 
 export const metadata: Metadata = { title: "Runs" };
 
@@ -31,7 +31,7 @@ export default async function ProjectRunsPage({ params }: { params: Promise<{ pr
         <h2 id="runs-heading" className="text-lg font-semibold">
           Runs
         </h2>
-        <RunsTable projectId={project.id} />
+        <RunsWorkspace projectId={project.id} role={me.role} />
       </section>
     </div>
   );
