@@ -124,6 +124,8 @@ export function RunsWorkspace({ projectId, role }: { projectId: string; role: Ro
   const rows = table.getRowModel().rows;
   const visible = RUN_COLUMNS.filter((c) => table.getColumn(c.id)?.getIsVisible() ?? true);
 
+  // TanStack Virtual returns fresh functions each render; the compiler skips this component, which is intended.
+  // eslint-disable-next-line react-hooks/incompatible-library
   const virtualizer = useVirtualizer({
     count: rows.length,
     getScrollElement: () => scrollRef.current,
