@@ -2,7 +2,7 @@
 // Applies one change to every selected run in one request (all or none).
 import { useState } from "react";
 import { sendJson } from "@/lib/client/fetcher";
-import type { RunRecord } from "@/lib/db/runs";
+import type { RunView as RunRecord } from "@/lib/services/runs";
 import type { Role } from "@/lib/auth/roles";
 import { BENCH_STATES } from "@/lib/domain/types";
 import { runBulkPatchSchema } from "@/lib/validation/runs";

@@ -2,7 +2,7 @@
 // A run's detail drawer: every field; the lead can edit them, checked by the same schema as the server.
 import { useState } from "react";
 import { sendJson } from "@/lib/client/fetcher";
-import type { RunRecord } from "@/lib/db/runs";
+import type { RunView as RunRecord } from "@/lib/services/runs";
 import { DROP_CLASSES, RETURN_KINDS, TERMINATIONS } from "@/lib/domain/types";
 import { runPatchSchema } from "@/lib/validation/runs";
 import { Button } from "@/components/ui/button";

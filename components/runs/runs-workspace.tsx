@@ -15,7 +15,7 @@ import {
 import { useVirtualizer } from "@tanstack/react-virtual";
 import { ApiError, sendJson } from "@/lib/client/fetcher";
 import { useRuns } from "@/lib/client/use-runs";
-import type { RunRecord } from "@/lib/db/runs";
+import type { RunView as RunRecord } from "@/lib/services/runs";
 import type { Role } from "@/lib/auth/roles";
 import { BENCH_STATES, type BenchState } from "@/lib/domain/types";
 import { NUMERIC_FIELDS, parseCellEdit } from "@/lib/client/run-edit";
@@ -23,7 +23,8 @@ import { ColourSwatch } from "@/components/ui/colour-swatch";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Notice } from "@/components/ui/notice";
 import { SkeletonRows } from "@/components/ui/skeleton";
-import { Button } from "@/components/ui/button";
+import { Button, buttonClass } from "@/components/ui/button";
+import { ImportPanel } from "@/components/runs/import-panel";
 import { StateBadge } from "@/components/runs/state-badge";
 import { RunDrawer } from "@/components/runs/run-drawer";
 import { BulkEditBar } from "@/components/runs/bulk-edit-bar";
@@ -47,6 +48,7 @@ const RUN_COLUMNS = [
   { id: "colour", header: "Colour", width: 100, editable: true },
   { id: "insulation", header: "Insulation", width: 140, editable: true },
   { id: "routedLengthMm", header: "Routed (mm)", width: 110, editable: true },
+  { id: "cutLengthMm", header: "Cut (mm)", width: 95, editable: false },
   { id: "currentA", header: "Current (A)", width: 100, editable: true },
   { id: "fuseA", header: "Fuse (A)", width: 90, editable: true },
   { id: "state", header: "State", width: 110, editable: false },
@@ -62,12 +64,13 @@ const columns = col.columns([
   col.accessor("colour", { id: "colour", header: "Colour", sortFn: "text" }),
   col.accessor((r) => r.insulation ?? "", { id: "insulation", header: "Insulation", sortFn: "text" }),
   col.accessor("routedLengthMm", { id: "routedLengthMm", header: "Routed (mm)", sortDescFirst: false }),
+  col.accessor("cutLengthMm", { id: "cutLengthMm", header: "Cut (mm)", sortDescFirst: false }),
   col.accessor((r) => r.currentA ?? -1, { id: "currentA", header: "Current (A)", sortDescFirst: false }),
   col.accessor((r) => r.fuseA ?? -1, { id: "fuseA", header: "Fuse (A)", sortDescFirst: false }),
   col.accessor((r) => BENCH_STATES.indexOf(r.state), { id: "state", header: "State", sortDescFirst: false }),
 ]);
 
-const NUMERIC: ReadonlySet<ColumnId> = new Set(NUMERIC_FIELDS);
+const NUMERIC: ReadonlySet<ColumnId> = new Set([...NUMERIC_FIELDS, "cutLengthMm"]);
 
 function display(run: RunRecord, id: ColumnId): string {
   const v = run[id];
@@ -82,6 +85,7 @@ function editValue(run: RunRecord, id: ColumnId): string {
 }
 
 export function RunsWorkspace({ projectId, role }: { projectId: string; role: Role }) {
+  const [importing, setImporting] = useState(false);
   const { data, error, isLoading, mutate } = useRuns(projectId);
   const [text, setText] = useState("");
   const [gauge, setGauge] = useState("");
@@ -236,11 +240,33 @@ export function RunsWorkspace({ projectId, role }: { projectId: string; role: Ro
     );
   }
   if (isLoading && !data) return <SkeletonRows rows={10} label="Loading runs" />;
+  const importPanel = importing ? (
+    <ImportPanel
+      projectId={projectId}
+      onClose={() => setImporting(false)}
+      onCommitted={(text) => {
+        setImporting(false);
+        setMessage({ tone: "ok", text });
+        void mutate();
+      }}
+    />
+  ) : null;
   if (data && data.total === 0) {
     return (
-      <EmptyState title="No runs in this project yet">
-        A run is one wire from end A to end B. Import the routed run list from a spreadsheet to start.
-      </EmptyState>
+      <div className="flex flex-col gap-3">
+        {importPanel}
+        {!importing ? (
+          <EmptyState
+            title="No runs in this project yet"
+            action={
+              canEdit ? <Button onClick={() => setImporting(true)}>Import a run list</Button> : undefined
+            }
+          >
+            A run is one wire from end A to end B. Import the routed run list from a spreadsheet to start.
+          </EmptyState>
+        ) : null}
+        {message ? <Notice tone={message.tone}>{message.text}</Notice> : null}
+      </div>
     );
   }
 
@@ -300,12 +326,32 @@ export function RunsWorkspace({ projectId, role }: { projectId: string; role: Ro
             </div>
           ) : null}
         </div>
+        <div className="flex items-center gap-2">
+          {canEdit ? (
+            <Button size="sm" onClick={() => setImporting((v) => !v)} aria-expanded={importing}>
+              Import
+            </Button>
+          ) : null}
+          <a
+            className={buttonClass("secondary", "sm")}
+            href={`/api/projects/${projectId}/runs/export?format=csv`}
+          >
+            Export CSV
+          </a>
+          <a
+            className={buttonClass("secondary", "sm")}
+            href={`/api/projects/${projectId}/runs/export?format=xlsx`}
+          >
+            Export XLSX
+          </a>
+        </div>
         <p className="ml-auto text-xs text-ink-faint" aria-live="polite">
           {filtered.length === all.length ? `${all.length} runs` : `${filtered.length} of ${all.length} runs`}
           {selected.size ? ` · ${selected.size} selected` : ""}
         </p>
       </div>
 
+      {importPanel}
       {message ? (
         <div className="flex items-start gap-2">
           <div className="flex-1">

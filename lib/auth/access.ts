@@ -19,6 +19,11 @@ export const ROUTE_ACCESS = {
   "GET /api/projects/[projectId]/runs": ALL_ROLES,
   "POST /api/projects/[projectId]/runs": LEAD_ONLY,
   "POST /api/projects/[projectId]/runs/bulk": ALL_ROLES,
+  "GET /api/projects/[projectId]/runs/export": ALL_ROLES,
+  "POST /api/projects/[projectId]/imports": LEAD_ONLY,
+  "GET /api/projects/[projectId]/imports/[importId]": LEAD_ONLY,
+  "PATCH /api/projects/[projectId]/imports/[importId]": LEAD_ONLY,
+  "POST /api/projects/[projectId]/imports/[importId]/commit": LEAD_ONLY,
   "GET /api/projects/[projectId]/runs/[runId]": ALL_ROLES,
   // Builders and technicians may change a run's state only; the service checks which fields each role sends.
   "PATCH /api/projects/[projectId]/runs/[runId]": ALL_ROLES,

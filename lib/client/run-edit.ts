@@ -1,5 +1,5 @@
 // Parsing one inline edit of a run with the same schema the server uses.
-import type { RunRecord } from "@/lib/db/runs";
+import type { RunView as RunRecord } from "@/lib/services/runs";
 import { runPatchSchema } from "@/lib/validation/runs";
 
 export const NUMERIC_FIELDS = ["routedLengthMm", "currentA", "fuseA"] as const;

@@ -2,7 +2,7 @@
 // SWR hook for all runs of a project: the API pages at 1,000, so this loads every page in parallel.
 import useSWR from "swr";
 import { fetcher } from "@/lib/client/fetcher";
-import type { RunRecord } from "@/lib/db/runs";
+import type { RunView as RunRecord } from "@/lib/services/runs";
 import type { Page } from "@/lib/validation/common";
 
 const PAGE = 1000;

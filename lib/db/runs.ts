@@ -190,3 +190,19 @@ export async function updateRunsBulk(
     .update({ ...changes, version: tx.raw("version + 1"), updatedAt: tx.fn.now() })
     .returning(RUN_COLUMNS as unknown as string[])) as RunRecord[];
 }
+
+/** Updates many runs, each with its own changes, bumping every version (inside the caller's transaction). */
+export async function updateRunsEach(
+  tx: Tx,
+  updates: { id: string; changes: Partial<RunData> }[],
+): Promise<RunRecord[]> {
+  const out: RunRecord[] = [];
+  for (const u of updates) {
+    const rows = (await tx("run")
+      .where({ id: u.id })
+      .update({ ...u.changes, version: tx.raw("version + 1"), updatedAt: tx.fn.now() })
+      .returning(RUN_COLUMNS as unknown as string[])) as RunRecord[];
+    if (rows[0]) out.push(rows[0]);
+  }
+  return out;
+}

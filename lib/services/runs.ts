@@ -1,6 +1,6 @@
 // Creating, editing and deleting runs: wire-ID generation, version checks, role limits on fields, audit events.
 import { randomBytes } from "node:crypto";
-import { db } from "@/lib/db/knex";
+import { db, type Tx } from "@/lib/db/knex";
 import { recordAudit, recordAudits } from "@/lib/db/audit";
 import {
   deleteRunRow,
@@ -15,7 +15,8 @@ import {
   type RunInsert,
   type RunRecord,
 } from "@/lib/db/runs";
-import type { ProjectRecord } from "@/lib/db/projects";
+import { settingsOf, type ProjectRecord } from "@/lib/db/projects";
+import { runCutLengthMm } from "@/lib/domain/cut-length";
 import type { TeamMe } from "@/lib/auth/guards";
 import type { Role } from "@/lib/auth/roles";
 import { traceCodeFromBytes } from "@/lib/domain/trace-code";
@@ -48,39 +49,50 @@ export async function createRuns(
   inputs: RunCreateInput[],
 ): Promise<RunRecord[]> {
   return db().transaction(async (tx) => {
-    const given = inputs.map((r) => r.wireId).filter((w): w is string => Boolean(w));
-    const dupInBody = given.filter((w, i) => given.indexOf(w) !== i);
-    if (dupInBody.length) {
-      throw conflict(`Wire ID ${dupInBody[0]} appears more than once.`, { wireIds: [...new Set(dupInBody)] });
-    }
-    const clash = await existingWireIds(tx, project.id, given);
-    if (clash.length)
-      throw conflict(`Wire ID ${clash[0]} is already used in this project.`, { wireIds: clash });
-
-    const blanks = inputs.filter((r) => !r.wireId).length;
-    const taken = new Set([...(await wireIdsWithPrefix(tx, project.id, project.wireIdPrefix)), ...given]);
-    const fresh = nextWireIds(project.wireIdPrefix, taken, blanks);
-    let k = 0;
-    const rows: RunInsert[] = inputs.map((r) => ({
-      ...r,
-      wireId: r.wireId ?? fresh[k++]!,
-      traceCode: traceCodeFromBytes(randomBytes(5)),
-    }));
-    const created = await insertRuns(tx, project.id, rows);
-    await recordAudits(
-      tx,
-      created.map((r) => ({
-        teamId: me.teamId,
-        actorUserId: me.user.id,
-        action: "run.create",
-        entityType: "run",
-        entityId: r.id,
-        detail: { projectId: project.id, wireId: r.wireId },
-      })),
-    );
+    const created = await createRunsInTx(tx, me, project, inputs);
     await touchProject(tx, project.id);
     return created;
   });
+}
+
+/** Inserts runs inside the caller's transaction: wire IDs checked or generated, trace codes made, audited. */
+export async function createRunsInTx(
+  tx: Tx,
+  me: TeamMe,
+  project: ProjectRecord,
+  inputs: (Omit<RunData, "wireId"> & { wireId: string | null })[],
+): Promise<RunRecord[]> {
+  const given = inputs.map((r) => r.wireId).filter((w): w is string => Boolean(w));
+  const dupInBody = given.filter((w, i) => given.indexOf(w) !== i);
+  if (dupInBody.length) {
+    throw conflict(`Wire ID ${dupInBody[0]} appears more than once.`, { wireIds: [...new Set(dupInBody)] });
+  }
+  const clash = await existingWireIds(tx, project.id, given);
+  if (clash.length)
+    throw conflict(`Wire ID ${clash[0]} is already used in this project.`, { wireIds: clash });
+
+  const blanks = inputs.filter((r) => !r.wireId).length;
+  const taken = new Set([...(await wireIdsWithPrefix(tx, project.id, project.wireIdPrefix)), ...given]);
+  const fresh = nextWireIds(project.wireIdPrefix, taken, blanks);
+  let k = 0;
+  const rows: RunInsert[] = inputs.map((r) => ({
+    ...r,
+    wireId: r.wireId || fresh[k++]!,
+    traceCode: traceCodeFromBytes(randomBytes(5)),
+  }));
+  const created = await insertRuns(tx, project.id, rows);
+  await recordAudits(
+    tx,
+    created.map((r) => ({
+      teamId: me.teamId,
+      actorUserId: me.user.id,
+      action: "run.create",
+      entityType: "run",
+      entityId: r.id,
+      detail: { projectId: project.id, wireId: r.wireId },
+    })),
+  );
+  return created;
 }
 
 const BUILDER_STATES: readonly BenchState[] = ["planned", "cut", "marked", "terminated"];
@@ -196,4 +208,12 @@ export async function bulkPatchRuns(
     await touchProject(tx, project.id);
     return updated;
   });
+}
+
+export type RunView = RunRecord & { cutLengthMm: number };
+
+/** Adds the cut length under the project's slack rule to each run (computed, never stored). */
+export function withCutLength(project: ProjectRecord, runs: RunRecord[]): RunView[] {
+  const settings = settingsOf(project);
+  return runs.map((r) => ({ ...r, cutLengthMm: runCutLengthMm(r, settings) }));
 }

@@ -57,6 +57,11 @@ export class Client {
     return this.request<T>("DELETE", path);
   }
 
+  /** The Cookie header for requests made outside this client (multipart uploads, downloads). */
+  cookieHeader(): string {
+    return this.cookie ?? "";
+  }
+
   get hasSession(): boolean {
     return this.cookie !== null;
   }

@@ -1,6 +1,6 @@
 import { json, readJson, readQuery, route } from "@/lib/http/handler";
 import { requireProject } from "@/lib/services/projects";
-import { createRuns } from "@/lib/services/runs";
+import { createRuns, withCutLength } from "@/lib/services/runs";
 import { listRuns } from "@/lib/db/runs";
 import { runCreateBodySchema, runListQuerySchema } from "@/lib/validation/runs";
 
@@ -10,13 +10,14 @@ export const dynamic = "force-dynamic";
 export const GET = route("GET /api/projects/[projectId]/runs", async ({ me, params, req }) => {
   const project = await requireProject(me.teamId, params.projectId);
   const query = readQuery(req, runListQuerySchema);
-  return listRuns(me.teamId, project.id, query);
+  const page = await listRuns(me.teamId, project.id, query);
+  return { ...page, items: withCutLength(project, page.items) };
 });
 
 /** One run, or `{ runs: [...] }` for many, in one transaction. */
 export const POST = route("POST /api/projects/[projectId]/runs", async ({ me, params, req }) => {
   const project = await requireProject(me.teamId, params.projectId);
   const { many, runs } = await readJson(req, runCreateBodySchema);
-  const created = await createRuns(me, project, runs);
+  const created = withCutLength(project, await createRuns(me, project, runs));
   return json(many ? { items: created, total: created.length } : created[0], 201);
 });
