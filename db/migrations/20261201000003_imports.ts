@@ -8,8 +8,9 @@ export async function up(knex: Knex): Promise<void> {
     t.text("created_by").nullable().references("app_user.id").onDelete("SET NULL");
     t.text("filename").notNullable();
     t.text("status").notNullable().defaultTo("preview");
-    t.jsonb("source_table").notNullable();
-    t.jsonb("preview").notNullable();
+    // json, not jsonb: these documents are stored and returned whole, never queried inside.
+    t.json("source_table").notNullable();
+    t.json("preview").notNullable();
     t.integer("version").notNullable().defaultTo(1);
     t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
     t.timestamp("committed_at", { useTz: true }).nullable();

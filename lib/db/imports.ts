@@ -38,7 +38,7 @@ export async function insertImport(
   filename: string,
   table: ImportTable,
   preview: ImportPreview,
-): Promise<string> {
+): Promise<{ id: string; createdAt: string }> {
   const [row] = (await db()("runImport")
     .insert({
       projectId,
@@ -47,8 +47,8 @@ export async function insertImport(
       sourceTable: JSON.stringify(table),
       preview: JSON.stringify(preview),
     })
-    .returning("id")) as [{ id: string }];
-  return row.id;
+    .returning(["id", "createdAt"])) as [{ id: string; createdAt: string }];
+  return row;
 }
 
 export async function getImport(
@@ -74,8 +74,6 @@ export async function savePreview(q: Db, importId: string, preview: ImportPrevie
     .update({ preview: JSON.stringify(preview), version: q.raw("version + 1") });
 }
 
-export async function markCommitted(tx: Tx, importId: string, preview: ImportPreview): Promise<void> {
-  await tx("runImport")
-    .where({ id: importId })
-    .update({ status: "committed", committedAt: tx.fn.now(), preview: JSON.stringify(preview) });
+export async function markCommitted(tx: Tx, importId: string): Promise<void> {
+  await tx("runImport").where({ id: importId }).update({ status: "committed", committedAt: tx.fn.now() });
 }

@@ -60,9 +60,8 @@ export async function uploadImport(me: TeamMe, project: ProjectRecord, file: Fil
   }
   const match = matchHeaders(table.headers);
   const preview = buildPreview(table, match, await existingRuns(me.teamId, project.id), settingsOf(project));
-  const id = await insertImport(project.id, me.user.id, table.filename, table, preview);
-  const stored = await getImport(me.teamId, project.id, id);
-  return view(stored!);
+  const { id, createdAt } = await insertImport(project.id, me.user.id, table.filename, table, preview);
+  return { id, filename: table.filename, status: "preview", createdAt, committedAt: null, preview };
 }
 
 export async function requireImport(me: TeamMe, project: ProjectRecord, importId: string | undefined) {
@@ -177,7 +176,7 @@ export async function commitImport(
         changed: updated.length,
       },
     });
-    await markCommitted(tx, importId, preview);
+    await markCommitted(tx, importId);
     await touchProject(tx, project.id);
     return {
       added: addedRows.length,
