@@ -25,6 +25,9 @@ import { Notice } from "@/components/ui/notice";
 import { SkeletonRows } from "@/components/ui/skeleton";
 import { Button, buttonClass } from "@/components/ui/button";
 import { ImportPanel } from "@/components/runs/import-panel";
+import { VerdictBadge } from "@/components/checks/verdict-badge";
+import { useChecks } from "@/lib/client/use-checks";
+import type { Verdict } from "@/lib/domain/checks";
 import { StateBadge } from "@/components/runs/state-badge";
 import { RunDrawer } from "@/components/runs/run-drawer";
 import { BulkEditBar } from "@/components/runs/bulk-edit-bar";
@@ -52,6 +55,7 @@ const RUN_COLUMNS = [
   { id: "currentA", header: "Current (A)", width: 100, editable: true },
   { id: "fuseA", header: "Fuse (A)", width: 90, editable: true },
   { id: "state", header: "State", width: 110, editable: false },
+  { id: "verdict", header: "Check", width: 90, editable: false },
 ] as const;
 type ColumnId = (typeof RUN_COLUMNS)[number]["id"];
 
@@ -68,11 +72,12 @@ const columns = col.columns([
   col.accessor((r) => r.currentA ?? -1, { id: "currentA", header: "Current (A)", sortDescFirst: false }),
   col.accessor((r) => r.fuseA ?? -1, { id: "fuseA", header: "Fuse (A)", sortDescFirst: false }),
   col.accessor((r) => BENCH_STATES.indexOf(r.state), { id: "state", header: "State", sortDescFirst: false }),
+  col.accessor("wireId", { id: "verdict", header: "Check", enableSorting: false }),
 ]);
 
 const NUMERIC: ReadonlySet<ColumnId> = new Set([...NUMERIC_FIELDS, "cutLengthMm"]);
 
-function display(run: RunRecord, id: ColumnId): string {
+function display(run: RunRecord, id: Exclude<ColumnId, "verdict">): string {
   const v = run[id];
   if (v === null || v === undefined || v === "") return "—";
   if (typeof v === "number") return v.toLocaleString("en-GB");
@@ -80,13 +85,27 @@ function display(run: RunRecord, id: ColumnId): string {
 }
 
 function editValue(run: RunRecord, id: ColumnId): string {
+  if (id === "verdict") return "";
   const v = run[id];
   return v === null || v === undefined ? "" : String(v);
 }
 
 export function RunsWorkspace({ projectId, role }: { projectId: string; role: Role }) {
   const [importing, setImporting] = useState(false);
-  const { data, error, isLoading, mutate } = useRuns(projectId);
+  const { data, error, isLoading, mutate: mutateRuns } = useRuns(projectId);
+  const checks = useChecks(projectId);
+  const verdicts = useMemo(
+    () => new Map((checks.data?.items ?? []).map((c) => [c.wireId, c.verdict] as const)),
+    [checks.data],
+  );
+  const mutateChecks = checks.mutate;
+  const mutate = useCallback(
+    (...args: Parameters<typeof mutateRuns>) => {
+      void mutateChecks();
+      return mutateRuns(...args);
+    },
+    [mutateRuns, mutateChecks],
+  );
   const [text, setText] = useState("");
   const [gauge, setGauge] = useState("");
   const [colour, setColour] = useState("");
@@ -163,7 +182,7 @@ export function RunsWorkspace({ projectId, role }: { projectId: string; role: Ro
     if (!editing) return;
     const run = all.find((r) => r.id === editing.runId);
     if (!run) return setEditing(null);
-    if (editValue(run, editing.col) === editing.value) return setEditing(null);
+    if (editing.col === "verdict" || editValue(run, editing.col) === editing.value) return setEditing(null);
     const parsed = parseCellEdit(run, editing.col, editing.value);
     if (!parsed.ok) return setEditing({ ...editing, error: parsed.message });
     try {
@@ -482,7 +501,12 @@ export function RunsWorkspace({ projectId, role }: { projectId: string; role: Ro
                             }}
                           />
                         ) : (
-                          <CellView run={run} id={c.id} onOpen={() => setDrawerRunId(run.id)} />
+                          <CellView
+                            run={run}
+                            id={c.id}
+                            verdict={verdicts.get(run.wireId)}
+                            onOpen={() => setDrawerRunId(run.id)}
+                          />
                         )}
                       </td>
                     );
@@ -521,7 +545,19 @@ export function RunsWorkspace({ projectId, role }: { projectId: string; role: Ro
   );
 }
 
-function CellView({ run, id, onOpen }: { run: RunRecord; id: ColumnId; onOpen: () => void }) {
+function CellView({
+  run,
+  id,
+  verdict,
+  onOpen,
+}: {
+  run: RunRecord;
+  id: ColumnId;
+  verdict: Verdict | undefined;
+  onOpen: () => void;
+}) {
+  if (id === "verdict")
+    return verdict ? <VerdictBadge verdict={verdict} /> : <span className="text-ink-faint">…</span>;
   if (id === "wireId") {
     return (
       <button

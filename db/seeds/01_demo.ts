@@ -72,8 +72,8 @@ const RUNS: Row[] = [
   // Sensor mast (12 V from DC1)
   ["025", "DC1:VOUT+", "TB1:1", "ferrule", "ferrule", "12 V sensor rail", "16 AWG", "OG", GXL, 125, 300, 5, null, "critical", null, null, null],
   ["026", "DC1:VOUT-", "TB1:2", "ferrule", "ferrule", "12 V sensor rail return", "16 AWG", "BK", GXL, 125, 300, 5, null, "critical", null, "025", null],
-  ["027", "TB1:3", "LID1:1", "ferrule", "pin", "Lidar power", "20 AWG", "OG", U1007, 80, 2350, 1.6, 2.2, "critical", null, null, "Up the mast; long run on thin wire"],
-  ["028", "TB1:4", "LID1:2", "ferrule", "pin", "Lidar power return", "20 AWG", "BK", U1007, 80, 2350, 1.6, 2.2, "critical", null, "027", null],
+  ["027", "TB1:3", "LID1:1", "ferrule", "pin", "Lidar power", "22 AWG", "OG", U1007, 80, 2350, 1.6, 2.2, "critical", null, null, "Up the mast; long run on thin wire"],
+  ["028", "TB1:4", "LID1:2", "ferrule", "pin", "Lidar power return", "22 AWG", "BK", U1007, 80, 2350, 1.6, 2.2, "critical", null, "027", null],
   ["029", "TB1:5", "CAM1:1", "ferrule", "pin", "Camera power", "20 AWG", "OG", U1007, 80, 2200, 0.6, null, "critical", null, null, null],
   ["030", "TB1:6", "CAM1:2", "ferrule", "pin", "Camera power return", "20 AWG", "BK", U1007, 80, 2200, 0.6, null, "critical", null, "029", null],
   ["031", "TB1:7", "GNSS1:1", "ferrule", "pin", "GNSS receiver power", "22 AWG", "OG", U1007, 80, 2400, 0.3, null, "critical", null, null, null],
@@ -94,7 +94,7 @@ const RUNS: Row[] = [
   ["045", "K1:33", "MC3:EN", "ferrule", "pin", "Deck enable", "20 AWG", "VT", U1007, 80, 1400, 0.1, null, "standard", null, null, null],
   ["046", "ES1:21", "CPU1:ESTOP", "fork", "pin", "E-stop state to compute", "22 AWG", "VTWH", U1007, 80, 880, 0.01, null, "standard", null, null, null],
   // Status beacon with LED indicators on series resistors
-  ["047", "FB1:5", "BCN1:+", "ring", "solder", "Beacon supply", "18 AWG", "RD", U1007, 80, 1900, 0.9, null, "standard", 15, null, "Fuse larger than this wire can carry: check"],
+  ["047", "FB1:5", "BCN1:+", "ring", "solder", "Beacon supply", "18 AWG", "RD", U1007, 80, 1900, 0.9, null, "standard", 25, null, "Fuse larger than this wire can carry: check"],
   ["048", "BCN1:-", "GB1:5", "solder", "ring", "Beacon return", "18 AWG", "BK", U1007, 80, 1900, 0.9, null, "standard", null, "047", null],
   ["049", "CPU1:LED1", "DS1:A", "pin", "solder", "Status LED green, via series resistor", "22 AWG", "GN", U1007, 80, 650, 0.02, null, "standard", null, null, null],
   ["050", "CPU1:LED2", "DS2:A", "pin", "solder", "Status LED amber, via series resistor", "22 AWG", "YE", U1007, 80, 650, 0.02, null, "standard", null, null, null],

@@ -20,6 +20,7 @@ export const ROUTE_ACCESS = {
   "POST /api/projects/[projectId]/runs": LEAD_ONLY,
   "POST /api/projects/[projectId]/runs/bulk": ALL_ROLES,
   "GET /api/projects/[projectId]/runs/export": ALL_ROLES,
+  "GET /api/projects/[projectId]/checks": ALL_ROLES,
   "POST /api/projects/[projectId]/imports": LEAD_ONLY,
   "GET /api/projects/[projectId]/imports/[importId]": LEAD_ONLY,
   "PATCH /api/projects/[projectId]/imports/[importId]": LEAD_ONLY,
