@@ -86,7 +86,6 @@ export function bundleBracket(bundleSize: number): { label: string; factor: numb
   return BUNDLE_BRACKETS.find((b) => bundleSize >= b.min) ?? { label: "1–2", factor: 1 };
 }
 
-
 export type AmpacityMethod = "table" | "next-smaller-size" | "area-scaled" | "largest-size";
 
 export interface BaseAmpacity {
