@@ -21,6 +21,7 @@ export const ROUTE_ACCESS = {
   "POST /api/projects/[projectId]/runs/bulk": ALL_ROLES,
   "GET /api/projects/[projectId]/runs/export": ALL_ROLES,
   "GET /api/projects/[projectId]/checks": ALL_ROLES,
+  "GET /api/trace/[code]": ALL_ROLES,
   "POST /api/projects/[projectId]/imports": LEAD_ONLY,
   "GET /api/projects/[projectId]/imports/[importId]": LEAD_ONLY,
   "PATCH /api/projects/[projectId]/imports/[importId]": LEAD_ONLY,

@@ -34,3 +34,26 @@ export async function recordAudits(q: Db, events: AuditInput[]): Promise<void> {
   }));
   for (let i = 0; i < rows.length; i += 1000) await q("auditEvents").insert(rows.slice(i, i + 1000));
 }
+
+export interface AuditEventView {
+  id: number;
+  action: string;
+  actorName: string | null;
+  detail: Record<string, unknown>;
+  createdAt: string;
+}
+
+/** The history of one record, oldest first. */
+export async function listEntityEvents(
+  q: Db,
+  teamId: string,
+  entityType: string,
+  entityId: string,
+): Promise<AuditEventView[]> {
+  return (await q("auditEvents as e")
+    .leftJoin("appUser as u", "u.id", "e.actorUserId")
+    .where({ "e.teamId": teamId, "e.entityType": entityType, "e.entityId": entityId })
+    .orderBy("e.id", "asc")
+    .limit(500)
+    .select("e.id", "e.action", "u.name as actorName", "e.detail", "e.createdAt")) as AuditEventView[];
+}
