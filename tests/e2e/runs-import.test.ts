@@ -25,12 +25,17 @@ const CSV = [
 describe("importing and editing runs", () => {
   it("imports through the drop zone, fixes a mapping, commits, edits a cell, and refuses a stale edit", async () => {
     await signInAs(a.page, baseUrl, "lead@example.test");
-    const created = await a.page.request.post(`${baseUrl}/api/projects`, {
-      data: { name: `Import e2e ${Date.now()}`, wireIdPrefix: "IMP-" },
-    });
-    expect(created.status()).toBe(201);
-    const { id } = (await created.json()) as { id: string };
-    await a.page.goto(`${baseUrl}/projects/${id}`);
+    await a.page.getByRole("button", { name: "New project" }).click();
+    await a.page.getByLabel("Project name").fill(`Import e2e ${Date.now()}`);
+    await a.page.getByLabel("Wire-ID prefix").fill("IMP-");
+    await a.page.getByRole("button", { name: "Create" }).click();
+    await a.page.waitForURL(/\/projects\/[0-9a-f-]{36}$/);
+    const id = new URL(a.page.url()).pathname.split("/").pop()!;
+
+    // The settings show the slack rule's defaults.
+    await a.page.getByRole("link", { name: "Settings" }).click();
+    expect(await a.page.getByLabel("Slack, percent of routed length").inputValue()).toBe("5");
+    await a.page.getByRole("link", { name: "Runs" }).click();
 
     await a.page.getByRole("button", { name: "Import a run list" }).click();
     await a.page.getByLabel("Run list file").setInputFiles({

@@ -4,6 +4,7 @@ import { requirePageUser } from "@/lib/auth/guards";
 import { listProjects } from "@/lib/db/projects";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Notice } from "@/components/ui/notice";
+import { NewProjectForm } from "@/components/projects/new-project-form";
 
 export const metadata: Metadata = { title: "Projects" };
 
@@ -25,6 +26,7 @@ export default async function ProjectsPage({ searchParams }: { searchParams: Pro
           <p className="text-sm font-semibold uppercase tracking-wide text-copper-dark">{me.teamName}</p>
           <h1 className="text-2xl font-bold">Projects</h1>
         </div>
+        {me.role === "lead" ? <NewProjectForm /> : null}
       </div>
       {denied ? <Notice tone="info">That screen is not open to your role in this team.</Notice> : null}
       {projects.length === 0 ? (
