@@ -125,6 +125,18 @@ export function MailboxScreen() {
               <div className="mt-4 whitespace-pre-wrap border-t border-line pt-4 text-base leading-relaxed">
                 <Linkified text={open.text} />
               </div>
+              {open.html ? (
+                <details className="mt-4 border-t border-line pt-3 text-sm">
+                  <summary className="cursor-pointer font-semibold text-ink-soft">HTML version</summary>
+                  {/* sandbox="" : no scripts, no navigation from the caught mail */}
+                  <iframe
+                    title={`HTML version of ${open.subject}`}
+                    sandbox=""
+                    srcDoc={open.html}
+                    className="mt-2 h-[28rem] w-full rounded border border-line bg-white"
+                  />
+                </details>
+              ) : null}
             </article>
           ) : null}
         </div>

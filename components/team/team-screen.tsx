@@ -2,6 +2,7 @@
 // The Team screen: members with roles and open invitations for everyone; inviting, resending, revoking, role
 // changes and removals for leads only (the API refuses the others whatever the screen shows).
 import { useState, type FormEvent } from "react";
+import { useRouter } from "next/navigation";
 import { ApiError, sendJson } from "@/lib/client/fetcher";
 import { useTeam } from "@/lib/client/use-team";
 import { ROLE_LABELS, ROLES, type Role } from "@/lib/auth/roles";
@@ -178,6 +179,7 @@ function MemberList({
   act: (fn: () => Promise<Message>) => Promise<void>;
 }) {
   const [confirming, setConfirming] = useState<string | null>(null);
+  const router = useRouter();
   return (
     <section aria-labelledby="members-heading" className="flex flex-col gap-3">
       <h2 id="members-heading" className="text-lg font-semibold">
@@ -209,6 +211,8 @@ function MemberList({
                     const role = e.target.value as Role;
                     void act(async () => {
                       await sendJson(`/api/team/members/${encodeURIComponent(m.userId)}`, "PATCH", { role });
+                      // A lead who changes their own role sees the screen of the new role.
+                      if (m.userId === meId) window.location.reload();
                       return { tone: "ok", text: `${m.name} is now a ${ROLE_LABELS[role].toLowerCase()}.` };
                     });
                   }}
@@ -234,6 +238,7 @@ function MemberList({
                       setConfirming(null);
                       void act(async () => {
                         await sendJson(`/api/team/members/${encodeURIComponent(m.userId)}`, "DELETE");
+                        if (m.userId === meId) router.push("/sign-in");
                         return { tone: "ok", text: `${m.name} was removed from the team and signed out.` };
                       });
                     }}
