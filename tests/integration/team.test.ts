@@ -112,7 +112,7 @@ describe("invitations", () => {
     expect(team.body.invitations.find((i) => i.id === outcome.invitation.id)).toBeUndefined();
   });
 
-  it("an existing user joins with their own password (or, signed in as that address, without)", async () => {
+  it("an existing user joins with their own password, not with a wrong one", async () => {
     const other = new Client(baseUrl);
     const email = addr("ash.morrow");
     expect(
