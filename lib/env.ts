@@ -8,7 +8,8 @@ const envSchema = z.object({
   COOKIE_SECURE: z.enum(["auto", "0", "1"]).default("auto"),
   SMTP_URL: z.string().default("smtp://127.0.0.1:2525"),
   MAIL_FROM: z.string().default("Loomwright <no-reply@loomwright.example.test>"),
-  DEV_MAILBOX: z.enum(["0", "1"]).default("1"),
+  // Unset: on in development and tests, off under NODE_ENV=production (see mailboxEnabled).
+  DEV_MAILBOX: z.preprocess((v) => (v === "" ? undefined : v), z.enum(["0", "1"]).optional()),
 });
 
 export type Env = z.infer<typeof envSchema>;
@@ -35,4 +36,14 @@ export function cookieSecure(): boolean {
   const url = new URL(e.PUBLIC_BASE_URL);
   const loopback = ["127.0.0.1", "localhost", "[::1]"].includes(url.hostname);
   return !(url.protocol === "http:" && loopback);
+}
+
+/**
+ * The development mailbox (the Mailbox page and GET /api/dev/mail) shows every caught mail, reset links included, to
+ * anyone: on only when DEV_MAILBOX=1, or when it is unset outside production. `npm start` and the tests set it to 1.
+ */
+export function mailboxEnabled(): boolean {
+  const e = env();
+  if (e.DEV_MAILBOX !== undefined) return e.DEV_MAILBOX === "1";
+  return e.NODE_ENV !== "production";
 }

@@ -8,11 +8,15 @@ export function AppHeader({
   name,
   teamName,
   role,
+  mailbox = false,
 }: {
   name: string;
   teamName: string | null;
   role: Role | null;
+  /** Show the development mailbox (only when it is enabled). */
+  mailbox?: boolean;
 }) {
+  const link = "rounded px-3 py-1.5 font-semibold hover:bg-white/10";
   return (
     <header className="border-b border-ink/10 bg-ink text-paper">
       <div className="mx-auto flex max-w-screen-2xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
@@ -23,6 +27,21 @@ export function AppHeader({
           <Link href="/projects" className="rounded px-3 py-1.5 font-semibold hover:bg-white/10">
             Projects
           </Link>
+          {role ? (
+            <Link href="/team" className={link}>
+              Team
+            </Link>
+          ) : null}
+          {role === "lead" ? (
+            <Link href="/audit" className={link}>
+              Audit
+            </Link>
+          ) : null}
+          {mailbox ? (
+            <Link href="/dev/mail" className={link}>
+              Mailbox
+            </Link>
+          ) : null}
         </nav>
         <div className="ml-auto flex items-center gap-3 text-sm">
           <span className="hidden text-paper/80 sm:inline">{teamName ?? "No team"}</span>

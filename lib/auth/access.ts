@@ -30,6 +30,18 @@ export const ROUTE_ACCESS = {
   // Builders and technicians may change a run's state only; the service checks which fields each role sends.
   "PATCH /api/projects/[projectId]/runs/[runId]": ALL_ROLES,
   "DELETE /api/projects/[projectId]/runs/[runId]": LEAD_ONLY,
+  "POST /api/auth/password-reset": "public",
+  "POST /api/auth/password-reset/confirm": "public",
+  "POST /api/invitations/accept": "public",
+  "GET /api/team": ALL_ROLES,
+  "POST /api/team/invitations": LEAD_ONLY,
+  "POST /api/team/invitations/[invitationId]/resend": LEAD_ONLY,
+  "DELETE /api/team/invitations/[invitationId]": LEAD_ONLY,
+  "PATCH /api/team/members/[userId]": LEAD_ONLY,
+  "DELETE /api/team/members/[userId]": LEAD_ONLY,
+  "GET /api/audit": LEAD_ONLY,
+  // Development only: answers 404 unless the mailbox is on (lib/env.ts mailboxEnabled).
+  "GET /api/dev/mail": "public",
 } as const satisfies Record<string, Access>;
 
 export type RouteKey = keyof typeof ROUTE_ACCESS;

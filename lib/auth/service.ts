@@ -2,6 +2,7 @@
 import { generateIdFromEntropySize, type Cookie } from "lucia";
 import { lucia } from "@/lib/auth/lucia";
 import { burnPasswordCheck, hashPassword, verifyPassword } from "@/lib/auth/password";
+import { assertSignInAllowed, noteSignInFailure, noteSignInSuccess } from "@/lib/auth/limits";
 import { createUserWithTeam, findUserByEmail, listMemberships } from "@/lib/db/users";
 import { conflict, unauthorized } from "@/lib/http/errors";
 import type { SignInInput, SignUpInput } from "@/lib/validation/auth";
@@ -25,16 +26,29 @@ export async function signUp(
   return { userId, teamId, cookie: lucia().createSessionCookie(session.id) };
 }
 
-export async function signIn(input: SignInInput): Promise<{ userId: string; cookie: Cookie }> {
+/** Checks the sign-in limits first (429 even for the right password once they are used up), then the password. */
+export async function signIn(
+  input: SignInInput,
+  clientIp: string,
+): Promise<{ userId: string; cookie: Cookie }> {
+  await assertSignInAllowed(input.email, clientIp);
   const user = await findUserByEmail(input.email);
-  if (!user) {
-    await burnPasswordCheck(input.password);
+  let ok = false;
+  if (user) ok = await verifyPassword(user.passwordHash, input.password);
+  else await burnPasswordCheck(input.password);
+  if (!user || !ok) {
+    await noteSignInFailure(input.email, clientIp);
     throw unauthorized(BAD_CREDENTIALS);
   }
-  if (!(await verifyPassword(user.passwordHash, input.password))) throw unauthorized(BAD_CREDENTIALS);
-  const teams = await listMemberships(user.id);
-  const session = await lucia().createSession(user.id, { team_id: teams[0]?.teamId ?? null });
-  return { userId: user.id, cookie: lucia().createSessionCookie(session.id) };
+  await noteSignInSuccess(input.email);
+  return { userId: user.id, cookie: await startSession(user.id) };
+}
+
+/** A new session in the given team, or the user's first team. */
+export async function startSession(userId: string, teamId?: string): Promise<Cookie> {
+  const team = teamId ?? (await listMemberships(userId))[0]?.teamId ?? null;
+  const session = await lucia().createSession(userId, { team_id: team });
+  return lucia().createSessionCookie(session.id);
 }
 
 export async function signOut(sessionId: string): Promise<Cookie> {

@@ -1,6 +1,7 @@
 // Users, teams and memberships.
-import { db, type Db } from "@/lib/db/knex";
+import { db, type Db, type Tx } from "@/lib/db/knex";
 import type { Role } from "@/lib/auth/roles";
+import { recordAudit } from "@/lib/db/audit";
 
 export interface UserRow {
   id: string;
@@ -47,8 +48,32 @@ export async function createUserWithTeam(input: {
     });
     const [team] = (await trx("team").insert({ name: input.teamName }).returning("id")) as [{ id: string }];
     await trx("membership").insert({ teamId: team.id, userId: input.id, role: "lead" });
+    await recordAudit(trx, {
+      teamId: team.id,
+      actorUserId: input.id,
+      action: "team.create",
+      entityType: "team",
+      entityId: team.id,
+      detail: { teamName: input.teamName, email: input.email },
+    });
     return { userId: input.id, teamId: team.id };
   });
+}
+
+export async function insertUser(
+  trx: Tx,
+  input: { id: string; email: string; name: string; passwordHash: string },
+): Promise<void> {
+  await trx("appUser").insert(input);
+}
+
+export async function setPasswordHash(trx: Tx, userId: string, passwordHash: string): Promise<void> {
+  await trx("appUser").where({ id: userId }).update({ passwordHash });
+}
+
+/** Ends every session of a user (after a password reset, before the new one is made). */
+export async function deleteUserSessions(trx: Tx, userId: string): Promise<void> {
+  await trx("userSession").where({ userId }).del();
 }
 
 export async function setSessionTeam(sessionId: string, teamId: string): Promise<void> {

@@ -1,10 +1,12 @@
 "use server";
 
-import { cookies } from "next/headers";
+import { cookies, headers } from "next/headers";
 import { redirect } from "next/navigation";
 import { signInSchema } from "@/lib/validation/auth";
 import { signIn } from "@/lib/auth/service";
 import { AppError, mapError } from "@/lib/http/errors";
+import { clientAddress } from "@/lib/http/client-address";
+import { retryMessage } from "@/lib/auth/limits";
 
 export interface SignInState {
   email: string;
@@ -22,9 +24,11 @@ export async function signInAction(_prev: SignInState, form: FormData): Promise<
   const parsed = signInSchema.safeParse({ email, password: form.get("password") });
   if (!parsed.success) return { email, error: parsed.error.issues[0]?.message ?? "Check the form." };
   try {
-    const { cookie } = await signIn(parsed.data);
+    const { cookie } = await signIn(parsed.data, clientAddress(await headers()));
     (await cookies()).set(cookie.name, cookie.value, cookie.attributes);
   } catch (e) {
+    if (e instanceof AppError && e.status === 429)
+      return { email, error: retryMessage(Number(e.headers?.["Retry-After"] ?? 60)) };
     return { email, error: e instanceof AppError ? e.message : mapError(e).body.error.message };
   }
   redirect(safeNext(form.get("next")));

@@ -36,6 +36,11 @@ export function SignInForm({ next }: { next: string }) {
       <Button type="submit" size="lg" disabled={pending}>
         {pending ? "Signing in…" : "Sign in"}
       </Button>
+      <p className="text-center text-sm">
+        <Link href="/forgot-password" className="font-semibold text-copper-dark underline">
+          Forgot your password?
+        </Link>
+      </p>
       <p className="text-center text-sm text-ink-soft">
         New team?{" "}
         <Link href="/sign-up" className="font-semibold text-copper-dark underline">
