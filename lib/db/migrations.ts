@@ -2,7 +2,9 @@
 import type { Knex } from "knex";
 import * as core from "@/db/migrations/20261201000001_core";
 import * as audit from "@/db/migrations/20261201000002_audit";
+import * as stock from "@/db/migrations/20261201000200_stock";
 import * as demo from "@/db/seeds/01_demo";
+import { seedStockIfEmpty } from "@/db/seeds/02_stock";
 
 type Migration = { up: (k: Knex) => Promise<void>; down: (k: Knex) => Promise<void> };
 
@@ -10,6 +12,7 @@ type Migration = { up: (k: Knex) => Promise<void>; down: (k: Knex) => Promise<vo
 const MIGRATIONS: Record<string, Migration> = {
   "20261201000001_core.ts": core,
   "20261201000002_audit.ts": audit,
+  "20261201000200_stock.ts": stock,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {
@@ -31,7 +34,10 @@ export async function rollbackAll(knex: Knex): Promise<void> {
   await knex.migrate.rollback({ migrationSource }, true);
 }
 
-/** Seeds the demo scenario when the database holds no users; returns whether it seeded. */
+/** Seeds the demo scenario when the database holds no users, then the demo team's stock when it has none;
+ * returns whether it seeded anything. */
 export async function seedDemo(knex: Knex): Promise<boolean> {
-  return demo.seedIfEmpty(knex);
+  const seeded = await demo.seedIfEmpty(knex);
+  const stockSeeded = await seedStockIfEmpty(knex);
+  return seeded || stockSeeded;
 }
