@@ -6,6 +6,7 @@ import { ALL_ROLES } from "@/lib/auth/roles";
 import { getProject } from "@/lib/db/projects";
 import { uuidSchema } from "@/lib/validation/common";
 import { RunsTable } from "@/components/runs/runs-table";
+import { MissingWireTypesLink } from "@/components/stock/missing-wire-types-link";
 
 export const metadata: Metadata = { title: "Runs" };
 
@@ -26,6 +27,7 @@ export default async function ProjectRunsPage({ params }: { params: Promise<{ pr
           {project.runCount} runs · supply {project.supplyV} V · slack max({project.slackPct} %,{" "}
           {project.slackMinMm} mm) + {project.serviceLoopMm} mm per end
         </p>
+        <MissingWireTypesLink projectId={project.id} />
       </div>
       <section aria-labelledby="runs-heading" className="flex flex-col gap-3">
         <h2 id="runs-heading" className="text-lg font-semibold">
