@@ -1,11 +1,12 @@
 "use client";
 // The Put-ups section of Stock: the purchasable spool lengths per wire type, with price per metre and supplier.
 import { useMemo, useState, type ReactNode } from "react";
+import Link from "next/link";
 import { createColumnHelper } from "@tanstack/react-table";
 import { sendJson } from "@/lib/client/fetcher";
 import { errorMessage, refreshStock, usePutUps, useWireTypes } from "@/lib/client/use-stock";
 import type { PutUpListItem } from "@/lib/db/put-ups";
-import { Button } from "@/components/ui/button";
+import { Button, buttonClass } from "@/components/ui/button";
 import { Dialog } from "@/components/ui/dialog";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Notice } from "@/components/ui/notice";
@@ -153,8 +154,12 @@ export function PutUpsPanel({
       <EmptyState
         title={selected ? `No put-ups for ${wireTypeText(selected)}` : "No put-ups yet"}
         action={
-          canEdit && (wtItems?.length ?? 0) > 0 ? (
+          !canEdit ? null : (wtItems?.length ?? 0) > 0 ? (
             <Button onClick={() => setDialog({ kind: "new" })}>Add put-up</Button>
+          ) : wtItems ? (
+            <Link href="/stock?tab=wire-types" className={buttonClass("secondary")}>
+              Add a wire type first
+            </Link>
           ) : null
         }
       >

@@ -1,11 +1,12 @@
 "use client";
 // The Shelf spools section of Stock: spools and remnants with their measured length, lot, location and state.
 import { useMemo, useState, type ReactNode } from "react";
+import Link from "next/link";
 import { createColumnHelper } from "@tanstack/react-table";
 import { errorMessage, useSpools, useWireTypes } from "@/lib/client/use-stock";
 import type { SpoolListItem } from "@/lib/db/spools";
 import { SPOOL_STATES, type SpoolState } from "@/lib/domain/stock";
-import { Button } from "@/components/ui/button";
+import { Button, buttonClass } from "@/components/ui/button";
 import { Dialog } from "@/components/ui/dialog";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Notice } from "@/components/ui/notice";
@@ -199,8 +200,12 @@ export function SpoolsPanel({
       <EmptyState
         title={filtered ? "No spools match these filters" : "The shelf is empty"}
         action={
-          canEdit && !filtered && (wtItems?.length ?? 0) > 0 ? (
+          !canEdit || filtered ? null : (wtItems?.length ?? 0) > 0 ? (
             <Button onClick={() => setDialog({ kind: "new" })}>Add spool</Button>
+          ) : wtItems ? (
+            <Link href="/stock?tab=wire-types" className={buttonClass("secondary")}>
+              Add a wire type first
+            </Link>
           ) : null
         }
       >

@@ -169,7 +169,12 @@ export function WireTypesPanel({ canEdit, prefill }: { canEdit: boolean; prefill
     );
   }, [items, filter]);
 
-  const close = () => setDialog({ kind: "none" });
+  const close = () => {
+    // A pre-filled form came from a link; once it is closed, a reload should not open it again.
+    if (dialog.kind === "new" && dialog.prefill)
+      window.history.replaceState(null, "", "/stock?tab=wire-types");
+    setDialog({ kind: "none" });
+  };
 
   let body: ReactNode;
   if (error) {

@@ -132,11 +132,12 @@ async function duplicateError(
   spec: { gauge: string; colour: string; insulation: string | null },
 ) {
   const existing = (await db()("wireType")
-    .select("id")
+    .select("id", "gauge", "colour", "insulation")
     .where({ teamId, gauge: spec.gauge, colour: spec.colour })
     .whereRaw("lower(coalesce(insulation, '')) = lower(?)", [spec.insulation ?? ""])
-    .first()) as { id: string } | undefined;
-  const label = `${spec.gauge} ${spec.colour} ${spec.insulation ?? "(insulation not stated)"}`;
+    .first()) as Pick<WireTypeRecord, "id" | "gauge" | "colour" | "insulation"> | undefined;
+  const shown = existing ?? spec;
+  const label = `${shown.gauge} ${shown.colour} ${shown.insulation ?? "(insulation not stated)"}`;
   return conflict(`A wire type ${label} already exists in this team.`, { existingId: existing?.id ?? null });
 }
 

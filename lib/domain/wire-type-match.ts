@@ -47,18 +47,41 @@ export function wireSpecKey(s: WireSpec): string {
  *    is not stated does not stand in for a stated one.
  * 3. A run that names no insulation matches a candidate that states none either; failing that, the only
  *    candidate if there is exactly one. Two or more candidates leave it ambiguous: the lead must say which.
+ *
+ * Returns a matcher that indexes the wire types once, for matching many runs.
  */
+export function wireTypeMatcher(wireTypes: readonly MatchableWireType[]): {
+  match: (run: WireSpec) => WireTypeMatch;
+  /** How many wire types share this gauge and colour. */
+  candidateCount: (run: WireSpec) => number;
+} {
+  const byGaugeColour = new Map<string, { id: string; ins: string }[]>();
+  for (const w of wireTypes) {
+    const k = `${gaugeKey(w.gauge)}|${colourKey(w.colour)}`;
+    const list = byGaugeColour.get(k) ?? [];
+    list.push({ id: w.id, ins: insulationKey(w.insulation) });
+    byGaugeColour.set(k, list);
+  }
+  const candidatesOf = (run: WireSpec) =>
+    byGaugeColour.get(`${gaugeKey(run.gauge)}|${colourKey(run.colour)}`) ?? [];
+  return {
+    candidateCount: (run) => candidatesOf(run).length,
+    match: (run) => {
+      const candidates = candidatesOf(run);
+      const ins = insulationKey(run.insulation);
+      const exact = candidates.find((w) => w.ins === ins);
+      if (exact) return { kind: "matched", wireTypeId: exact.id };
+      if (ins !== "") return { kind: "missing" };
+      if (candidates.length === 1) return { kind: "matched", wireTypeId: candidates[0]!.id };
+      if (candidates.length === 0) return { kind: "missing" };
+      return { kind: "ambiguous", candidateIds: candidates.map((w) => w.id) };
+    },
+  };
+}
+
+/** The matching rule above for one run (see wireTypeMatcher for many). */
 export function matchWireType(run: WireSpec, wireTypes: readonly MatchableWireType[]): WireTypeMatch {
-  const g = gaugeKey(run.gauge);
-  const c = colourKey(run.colour);
-  const candidates = wireTypes.filter((w) => gaugeKey(w.gauge) === g && colourKey(w.colour) === c);
-  const ins = insulationKey(run.insulation);
-  const exact = candidates.find((w) => insulationKey(w.insulation) === ins);
-  if (exact) return { kind: "matched", wireTypeId: exact.id };
-  if (ins !== "") return { kind: "missing" };
-  if (candidates.length === 1) return { kind: "matched", wireTypeId: candidates[0]!.id };
-  if (candidates.length === 0) return { kind: "missing" };
-  return { kind: "ambiguous", candidateIds: candidates.map((w) => w.id) };
+  return wireTypeMatcher(wireTypes).match(run);
 }
 
 /** A run as the unmatched list needs it. */
@@ -97,10 +120,11 @@ export function unmatchedCombinations(
     if (g) g.push(r);
     else groups.set(k, [r]);
   }
+  const matcher = wireTypeMatcher(wireTypes);
   const out: UnmatchedCombination[] = [];
   for (const group of groups.values()) {
     const first = group[0]!;
-    const m = matchWireType(first, wireTypes);
+    const m = matcher.match(first);
     if (m.kind === "matched") continue;
     const g = gaugeKey(first.gauge);
     const c = colourKey(first.colour);
@@ -112,7 +136,7 @@ export function unmatchedCombinations(
       insulation: ins === "" ? null : ins,
       insulationTempC: temps.length ? Math.max(...temps) : null,
       reason: m.kind,
-      candidateCount: wireTypes.filter((w) => gaugeKey(w.gauge) === g && colourKey(w.colour) === c).length,
+      candidateCount: matcher.candidateCount(first),
       runCount: group.length,
       routedLengthMm: group.reduce((s, r) => s + r.routedLengthMm, 0),
       wireIds: group.slice(0, 5).map((r) => r.wireId),

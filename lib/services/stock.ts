@@ -3,7 +3,7 @@ import { db, type Db } from "@/lib/db/knex";
 import { listAllRuns } from "@/lib/db/runs";
 import { listAllWireTypes } from "@/lib/db/wire-types";
 import {
-  matchWireType,
+  wireTypeMatcher,
   unmatchedCombinations,
   type UnmatchedCombination,
   type WireTypeMatch,
@@ -22,7 +22,8 @@ export async function matchProjectRuns(
     listAllRuns(teamId, projectId, q),
     listAllWireTypes(teamId, q),
   ]);
-  return new Map(runs.map((r) => [r.id, matchWireType(r, wireTypes)]));
+  const matcher = wireTypeMatcher(wireTypes);
+  return new Map(runs.map((r) => [r.id, matcher.match(r)]));
 }
 
 export async function listUnmatchedWireTypes(
