@@ -27,6 +27,9 @@ export function AppHeader({
           <Link href="/projects" className="rounded px-3 py-1.5 font-semibold hover:bg-white/10">
             Projects
           </Link>
+          <Link href="/stock" className={link}>
+            Stock
+          </Link>
           {role ? (
             <Link href="/team" className={link}>
               Team

@@ -7,8 +7,16 @@ export function SelectField({
   hint,
   id,
   children,
+  options,
   ...rest
-}: SelectHTMLAttributes<HTMLSelectElement> & { label: string; error?: string; hint?: string; id: string }) {
+}: SelectHTMLAttributes<HTMLSelectElement> & {
+  label: string;
+  error?: string;
+  hint?: string;
+  id: string;
+  /** The choices, when not given as <option> children. */
+  options?: readonly { value: string; label: string }[];
+}) {
   const describedBy = [error ? `${id}-error` : null, hint ? `${id}-hint` : null].filter(Boolean).join(" ");
   return (
     <div className="flex flex-col gap-1">
@@ -22,7 +30,13 @@ export function SelectField({
         className={`h-11 rounded-md border bg-white px-3 text-base text-ink shadow-sm focus:border-copper focus:outline-none ${error ? "border-fail" : "border-line-strong"}`}
         {...rest}
       >
-        {children}
+        {options
+          ? options.map((o) => (
+              <option key={o.value} value={o.value}>
+                {o.label}
+              </option>
+            ))
+          : children}
       </select>
       {hint && !error ? (
         <p id={`${id}-hint`} className="text-xs text-ink-faint">

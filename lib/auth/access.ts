@@ -42,6 +42,23 @@ export const ROUTE_ACCESS = {
   "GET /api/audit": LEAD_ONLY,
   // Development only: answers 404 unless the mailbox is on (lib/env.ts mailboxEnabled).
   "GET /api/dev/mail": "public",
+  // Stock: the lead edits; builders and technicians read.
+  "GET /api/projects/[projectId]/unmatched-wire-types": ALL_ROLES,
+  "GET /api/stock/wire-types": ALL_ROLES,
+  "POST /api/stock/wire-types": LEAD_ONLY,
+  "GET /api/stock/wire-types/[wireTypeId]": ALL_ROLES,
+  "PATCH /api/stock/wire-types/[wireTypeId]": LEAD_ONLY,
+  "DELETE /api/stock/wire-types/[wireTypeId]": LEAD_ONLY,
+  "GET /api/stock/put-ups": ALL_ROLES,
+  "POST /api/stock/put-ups": LEAD_ONLY,
+  "PATCH /api/stock/put-ups/[putUpId]": LEAD_ONLY,
+  "DELETE /api/stock/put-ups/[putUpId]": LEAD_ONLY,
+  "GET /api/stock/spools": ALL_ROLES,
+  "POST /api/stock/spools": LEAD_ONLY,
+  "GET /api/stock/spools/[spoolId]": ALL_ROLES,
+  "PATCH /api/stock/spools/[spoolId]": LEAD_ONLY,
+  "GET /api/stock/spools/[spoolId]/adjustments": ALL_ROLES,
+  "POST /api/stock/spools/[spoolId]/adjustments": LEAD_ONLY,
 } as const satisfies Record<string, Access>;
 
 export type RouteKey = keyof typeof ROUTE_ACCESS;

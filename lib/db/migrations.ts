@@ -4,7 +4,9 @@ import * as core from "@/db/migrations/20261201000001_core";
 import * as audit from "@/db/migrations/20261201000002_audit";
 import * as imports from "@/db/migrations/20261201000003_imports";
 import * as teamMail from "@/db/migrations/20261201000100_team_mail";
+import * as stock from "@/db/migrations/20261201000200_stock";
 import * as demo from "@/db/seeds/01_demo";
+import { seedStockIfEmpty } from "@/db/seeds/02_stock";
 
 type Migration = { up: (k: Knex) => Promise<void>; down: (k: Knex) => Promise<void> };
 
@@ -14,6 +16,7 @@ const MIGRATIONS: Record<string, Migration> = {
   "20261201000002_audit.ts": audit,
   "20261201000003_imports.ts": imports,
   "20261201000100_team_mail.ts": teamMail,
+  "20261201000200_stock.ts": stock,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {
@@ -35,7 +38,10 @@ export async function rollbackAll(knex: Knex): Promise<void> {
   await knex.migrate.rollback({ migrationSource }, true);
 }
 
-/** Seeds the demo scenario when the database holds no users; returns whether it seeded. */
+/** Seeds the demo scenario when the database holds no users, then the demo team's stock when it has none;
+ * returns whether it seeded anything. */
 export async function seedDemo(knex: Knex): Promise<boolean> {
-  return demo.seedIfEmpty(knex);
+  const seeded = await demo.seedIfEmpty(knex);
+  const stockSeeded = await seedStockIfEmpty(knex);
+  return seeded || stockSeeded;
 }

@@ -1,5 +1,7 @@
 // Test database access: a fresh schema with the demo seed, and knex instances for tests to read and write.
+import { randomBytes } from "node:crypto";
 import { makeKnex } from "@/lib/db/knex";
+import { traceCodeFromBytes } from "@/lib/domain/trace-code";
 import { migrateLatest, rollbackAll, seedDemo } from "@/lib/db/migrations";
 
 export function testDatabaseUrl(kind: "integration" | "e2e" = "integration"): string {
@@ -37,4 +39,40 @@ export async function scratchDatabase(name: string): Promise<string> {
   }
   base.pathname = `/${name}`;
   return base.toString();
+}
+
+/** Inserts a run straight into a project of the test database (for cases the API cannot make yet). */
+export async function insertRun(
+  projectId: string,
+  run: { wireId: string; gauge: string; colour: string; insulation: string | null; routedLengthMm: number },
+  url: string = testDatabaseUrl(),
+): Promise<string> {
+  const k = makeKnex(url, { camel: false, poolMax: 1 });
+  try {
+    const [row] = (await k("run")
+      .insert({
+        project_id: projectId,
+        wire_id: run.wireId,
+        end_a: "TEST:1",
+        end_b: "TEST:2",
+        gauge: run.gauge,
+        colour: run.colour,
+        insulation: run.insulation,
+        routed_length_mm: run.routedLengthMm,
+        trace_code: traceCodeFromBytes(randomBytes(5)),
+      })
+      .returning("id")) as [{ id: string }];
+    return row.id;
+  } finally {
+    await k.destroy();
+  }
+}
+
+export async function deleteRuns(ids: string[], url: string = testDatabaseUrl()): Promise<void> {
+  const k = makeKnex(url, { camel: false, poolMax: 1 });
+  try {
+    await k("run").whereIn("id", ids).delete();
+  } finally {
+    await k.destroy();
+  }
 }

@@ -5,6 +5,7 @@ import { ALL_ROLES } from "@/lib/auth/roles";
 import { getProject } from "@/lib/db/projects";
 import { uuidSchema } from "@/lib/validation/common";
 import { ProjectNav } from "@/components/projects/project-nav";
+import { MissingWireTypesLink } from "@/components/stock/missing-wire-types-link";
 
 export default async function ProjectLayout({
   children,
@@ -31,6 +32,7 @@ export default async function ProjectLayout({
           rounded up to {project.roundingMm} mm
         </p>
       </div>
+      <MissingWireTypesLink projectId={project.id} />
       <ProjectNav projectId={project.id} />
       {children}
     </div>
