@@ -82,6 +82,7 @@ interface Fixture {
   invitationId: string;
   spareInvitationId: string;
   spareMemberId: string;
+  spareRunId: string;
 }
 
 /** How each dynamic segment is filled with a real id of the demo team. Unknown names get UNKNOWN_ID. */
@@ -106,6 +107,7 @@ const CASES: Record<string, Case> = {
   "POST /api/auth/sign-out": { freshSession: true },
   "PATCH /api/team/members/[userId]": { body: { role: "builder" } },
   "DELETE /api/team/members/[userId]": { allowedParams: (f) => ({ userId: f.spareMemberId }) },
+  "DELETE /api/projects/[projectId]/runs/[runId]": { allowedParams: (f) => ({ runId: f.spareRunId }) },
   "DELETE /api/team/invitations/[invitationId]": {
     allowedParams: (f) => ({ invitationId: f.spareInvitationId }),
   },
@@ -187,6 +189,15 @@ describe("role matrix", () => {
       expect(r.status).toBe(201);
       return r.body.invitation.id;
     };
+    const spareRun = await lead.post<{ id: string }>(`/api/projects/${project.id}/runs`, {
+      wireId: `MATRIX-${stamp}`,
+      endA: "TB99:1",
+      endB: "TB99:2",
+      gauge: "22 AWG",
+      colour: "WH",
+      routedLengthMm: 100,
+    });
+    expect(spareRun.status).toBe(201);
     const invitationId = await invite("matrix-pending");
     const spareInvitationId = await invite("matrix-spare-invite");
     const spareEmail = `matrix-spare-member-${stamp}@example.test`;
@@ -206,6 +217,7 @@ describe("role matrix", () => {
       invitationId,
       spareInvitationId,
       spareMemberId: accepted.body.user.id,
+      spareRunId: spareRun.body.id,
     };
   });
 
