@@ -6,7 +6,7 @@ import type { RunView as RunRecord } from "@/lib/services/runs";
 import type { Role } from "@/lib/auth/roles";
 import { BENCH_STATES } from "@/lib/domain/types";
 import { runBulkPatchSchema } from "@/lib/validation/runs";
-import { Button } from "@/components/ui/button";
+import { Button, buttonClass } from "@/components/ui/button";
 
 const FIELDS = [
   { key: "gauge", label: "Gauge", leadOnly: true },
@@ -104,6 +104,12 @@ export function BulkEditBar(props: {
       <Button size="sm" onClick={() => void apply()} disabled={busy}>
         {busy ? "Applying…" : `Apply to ${props.runs.length}`}
       </Button>
+      <a
+        className={buttonClass("secondary", "sm")}
+        href={`/projects/${props.projectId}/print?runs=${props.runs.map((r) => r.wireId).join(",")}`}
+      >
+        Print markers
+      </a>
       <Button size="sm" variant="quiet" onClick={props.onClear}>
         Clear selection
       </Button>
