@@ -25,7 +25,8 @@ function tool(cmd: string, args: string[]): string {
 beforeAll(async () => {
   dir = fs.mkdtempSync(path.join(os.tmpdir(), "loomwright-markers-api-"));
   tech = await signedIn(baseUrl, "technician@example.test");
-  projectId = (await tech.get<{ items: { id: string }[] }>("/api/projects")).body.items[0]!.id;
+  const list = await tech.get<{ items: { id: string; name: string }[] }>("/api/projects");
+  projectId = list.body.items.find((p) => p.name === "Harrow-3")!.id;
 });
 afterAll(() => fs.rmSync(dir, { recursive: true, force: true }));
 

@@ -11,14 +11,14 @@ export const GET = route("GET /api/projects/[projectId]", async ({ me, params })
 });
 
 export const PATCH = route("PATCH /api/projects/[projectId]", async ({ me, params, req }) => {
-  const input = await readJson(req, projectPatchSchema);
   await requireProject(me.teamId, params.projectId);
+  const input = await readJson(req, projectPatchSchema);
   return patchProject(me, params.projectId!, input);
 });
 
 /** Archives the project (nothing is deleted; PATCH {archived:false} restores it). */
 export const DELETE = route("DELETE /api/projects/[projectId]", async ({ me, params, req }) => {
-  const { version } = readQuery(req, z.object({ version: z.coerce.number().int().min(1) }));
   await requireProject(me.teamId, params.projectId);
+  const { version } = readQuery(req, z.object({ version: z.coerce.number().int().min(1) }));
   return patchProject(me, params.projectId!, { version, archived: true });
 });

@@ -14,6 +14,8 @@ export const GET = route("GET /api/stock/wire-types/[wireTypeId]", async ({ me, 
 
 export const PATCH = route("PATCH /api/stock/wire-types/[wireTypeId]", async ({ me, params, req }) => {
   const id = idParam(params.wireTypeId, WHAT);
+  // Another team's record is not found before its body is judged.
+  found(await getWireType(me.teamId, id), WHAT);
   const patch = await readJson(req, wireTypePatchSchema);
   return updateWireType(me.teamId, me.user.id, id, patch);
 });
