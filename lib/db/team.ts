@@ -243,3 +243,10 @@ export async function claimInvitation(trx: Tx, id: string, tokenHash: string): P
 export async function setInvitationAcceptedBy(trx: Tx, id: string, userId: string): Promise<void> {
   await trx("invitation").where({ id }).update({ acceptedBy: userId });
 }
+
+/** The paper size the team prints cut sheets on (A4 or US Letter). */
+export async function teamPageSize(teamId: string, q: Db = db()): Promise<"A4" | "Letter"> {
+  const row = (await q("team").where({ id: teamId }).first("pageSize")) as
+    { pageSize: "A4" | "Letter" } | undefined;
+  return row?.pageSize ?? "A4";
+}

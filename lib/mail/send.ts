@@ -7,6 +7,7 @@ export interface OutgoingMail {
   subject: string;
   text: string;
   html: string;
+  attachments?: { filename: string; content: string | Buffer; contentType: string }[];
 }
 
 export type SendResult = { ok: true; messageId: string } | { ok: false; error: string };
