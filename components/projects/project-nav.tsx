@@ -6,6 +6,7 @@ import { usePathname } from "next/navigation";
 const SECTIONS = [
   { href: "", label: "Runs" },
   { href: "/checks", label: "Checks" },
+  { href: "/plan", label: "Spool plan" },
   { href: "/print", label: "Print" },
   { href: "/settings", label: "Settings" },
 ];

@@ -1,5 +1,6 @@
-// The spool planner: per wire type, first-fit/best-fit decreasing as the incumbent, then column generation
-// with rounding, a restricted-master MIP and diving; returns the best plan found with its proven lower bound.
+// The spool planner: per wire type, first-fit/best-fit decreasing as the incumbent, an exact purchase search
+// for small jobs, then column generation with rounding, diving, reduced-cost enumeration and restricted-master
+// MIPs; returns the best plan found with the lower bound it proved.
 
 import { Master, dive, getHighs } from "@/lib/domain/spool-plan/column-generation";
 import { greedyPack } from "@/lib/domain/spool-plan/ffd";
