@@ -20,7 +20,9 @@ export async function up(knex: Knex): Promise<void> {
     t.text("committed_by").nullable().references("app_user.id").onDelete("SET NULL");
     t.index(["project_id", "created_at"]);
   });
-  await knex.raw(`alter table spool_plan add constraint spool_plan_status_check check (status in ('draft','committed'))`);
+  await knex.raw(
+    `alter table spool_plan add constraint spool_plan_status_check check (status in ('draft','committed'))`,
+  );
 }
 
 export async function down(knex: Knex): Promise<void> {
