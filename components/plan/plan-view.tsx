@@ -193,6 +193,12 @@ export function PlanView({ projectId, role }: { projectId: string; role: Role })
                           · {s.cuts.length} cuts · leftover {s.leftoverMm} mm {s.keep ? "(keep)" : "(scrap)"}
                         </p>
                         <SpoolBar spool={s} scaleMm={scale} />
+                        <a
+                          className="self-start text-xs font-semibold text-copper-dark underline"
+                          href={`/projects/${projectId}/print?runs=${s.cuts.map((c) => c.wireId).join(",")}`}
+                        >
+                          Print markers for this spool
+                        </a>
                         <p className="font-mono text-xs text-ink-soft">
                           {s.cuts.map((c) => `${c.wireId} ${c.cutLengthMm}`).join(" · ")}
                         </p>

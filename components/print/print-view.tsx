@@ -4,20 +4,35 @@ import { useMemo, useState } from "react";
 import useSWR from "swr";
 import { fetcher } from "@/lib/client/fetcher";
 import { useRuns } from "@/lib/client/use-runs";
-import type { MarkerTemplate } from "@/lib/domain/marker-templates";
+import type { TemplateView } from "@/lib/services/print";
+import type { Role } from "@/lib/auth/roles";
+import { sendJson } from "@/lib/client/fetcher";
+import { TemplateEditor } from "@/components/print/template-editor";
 import { BENCH_STATES } from "@/lib/domain/types";
 import { Button, buttonClass } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { SkeletonRows } from "@/components/ui/skeleton";
 
-type Mode = "all" | "state" | "gauge" | "list";
+type Mode = "all" | "state" | "type" | "list";
 
-export function PrintView({ projectId, initialRuns }: { projectId: string; initialRuns: string }) {
-  const templates = useSWR<{ items: MarkerTemplate[] }>("/api/print/templates", fetcher);
+export function PrintView({
+  projectId,
+  initialRuns,
+  role,
+  pageSize,
+}: {
+  projectId: string;
+  initialRuns: string;
+  role: Role;
+  pageSize: "A4" | "Letter";
+}) {
+  const templates = useSWR<{ items: TemplateView[] }>("/api/print/templates", fetcher);
+  const [paper, setPaper] = useState(pageSize);
+  const [editing, setEditing] = useState(false);
   const runs = useRuns(projectId);
   const [mode, setMode] = useState<Mode>(initialRuns ? "list" : "all");
   const [state, setState] = useState<string>("planned");
-  const [gauge, setGauge] = useState<string>("");
+  const [wireType, setWireType] = useState<string>("");
   const [list, setList] = useState(initialRuns.split(",").filter(Boolean).join("\n"));
   const [templateId, setTemplateId] = useState("a4-proof-mixed");
   const [preview, setPreview] = useState<string | null>(null);
@@ -25,22 +40,28 @@ export function PrintView({ projectId, initialRuns }: { projectId: string; initi
   const [error, setError] = useState<string | null>(null);
 
   const all = runs.data?.items;
-  const gauges = useMemo(() => [...new Set((all ?? []).map((r) => r.gauge))].sort(), [all]);
+  const typeKey = (r: { gauge: string; colour: string; insulation: string | null }) =>
+    `${r.gauge} ${r.colour}${r.insulation ? ` ${r.insulation}` : ""}`;
+  const types = useMemo(() => [...new Set((all ?? []).map(typeKey))].sort(), [all]);
+  const typeRuns = useMemo(
+    () => (all ?? []).filter((r) => typeKey(r) === (wireType || types[0])).map((r) => r.wireId),
+    [all, wireType, types],
+  );
   const chosen = useMemo(() => {
     if (!all) return 0;
     if (mode === "state") return all.filter((r) => r.state === state).length;
-    if (mode === "gauge") return all.filter((r) => r.gauge === (gauge || gauges[0])).length;
+    if (mode === "type") return typeRuns.length;
     if (mode === "list") {
       const ids = new Set(list.split(/[\s,]+/).filter(Boolean));
       return all.filter((r) => ids.has(r.wireId) || ids.has(r.id)).length;
     }
     return all.length;
-  }, [all, mode, state, gauge, gauges, list]);
+  }, [all, mode, state, typeRuns, list]);
 
   const url = useMemo(() => {
     const p = new URLSearchParams({ template: templateId });
     if (mode === "state") p.set("state", state);
-    if (mode === "gauge") p.set("gauge", gauge || gauges[0] || "");
+    if (mode === "type") p.set("runs", typeRuns.join(","));
     if (mode === "list")
       p.set(
         "runs",
@@ -50,7 +71,7 @@ export function PrintView({ projectId, initialRuns }: { projectId: string; initi
           .join(","),
       );
     return `/api/projects/${projectId}/markers.pdf?${p.toString()}`;
-  }, [projectId, templateId, mode, state, gauge, gauges, list]);
+  }, [projectId, templateId, mode, state, typeRuns, list]);
 
   async function showPreview() {
     setError(null);
@@ -93,7 +114,7 @@ export function PrintView({ projectId, initialRuns }: { projectId: string; initi
             [
               ["all", `every run (${all.length})`],
               ["state", "runs in a state"],
-              ["gauge", "one gauge"],
+              ["type", "one wire type"],
               ["list", "these wire IDs (reprint)"],
             ] as const
           ).map(([m, label]) => (
@@ -114,14 +135,14 @@ export function PrintView({ projectId, initialRuns }: { projectId: string; initi
               ))}
             </select>
           ) : null}
-          {mode === "gauge" ? (
+          {mode === "type" ? (
             <select
-              aria-label="Gauge"
-              value={gauge || gauges[0]}
-              onChange={(e) => setGauge(e.target.value)}
+              aria-label="Wire type"
+              value={wireType || types[0]}
+              onChange={(e) => setWireType(e.target.value)}
               className="h-10 rounded-md border border-line-strong px-2"
             >
-              {gauges.map((g) => (
+              {types.map((g) => (
                 <option key={g}>{g}</option>
               ))}
             </select>
@@ -163,6 +184,38 @@ export function PrintView({ projectId, initialRuns }: { projectId: string; initi
           </p>
         ) : null}
 
+        {role === "lead" && template ? (
+          <details open={editing} onToggle={(e) => setEditing((e.target as HTMLDetailsElement).open)}>
+            <summary className="cursor-pointer text-sm font-semibold">Save a copy as a team template</summary>
+            <div className="mt-2">
+              <TemplateEditor
+                key={template.id}
+                base={template}
+                onSaved={(t) => {
+                  void templates.mutate();
+                  setTemplateId(t.id);
+                  setEditing(false);
+                }}
+              />
+            </div>
+          </details>
+        ) : null}
+        {role === "lead" && template && !template.builtIn ? (
+          <Button
+            type="button"
+            size="sm"
+            variant="quiet"
+            onClick={() =>
+              void sendJson(`/api/print/templates/${template.id}`, "DELETE").then(() => {
+                setTemplateId("a4-proof-mixed");
+                void templates.mutate();
+              })
+            }
+          >
+            Delete this team template
+          </Button>
+        ) : null}
+
         <Button type="submit" disabled={loading || chosen === 0}>
           {loading ? `Preparing ${chosen * 2}+ markers…` : "Preview"}
         </Button>
@@ -170,6 +223,24 @@ export function PrintView({ projectId, initialRuns }: { projectId: string; initi
           Download marker PDF
         </a>
         {error ? <Notice tone="error">{error}</Notice> : null}
+        {role === "lead" ? (
+          <label className="flex items-center justify-between gap-2 text-sm">
+            Cut sheets print on
+            <select
+              aria-label="Cut sheet paper"
+              value={paper}
+              onChange={(e) => {
+                const v = e.target.value as "A4" | "Letter";
+                setPaper(v);
+                void sendJson("/api/team/page-size", "PATCH", { pageSize: v });
+              }}
+              className="h-9 rounded-md border border-line-strong px-2"
+            >
+              <option value="A4">A4</option>
+              <option value="Letter">US Letter</option>
+            </select>
+          </label>
+        ) : null}
         <p className="text-xs text-ink-faint">
           Print at 100 % (no fit-to-page). Barcodes encode each run&apos;s trace link, or its 8-character code
           on sleeves too small for the link.

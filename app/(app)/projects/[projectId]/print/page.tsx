@@ -4,6 +4,7 @@ import { requirePageRole } from "@/lib/auth/guards";
 import { ALL_ROLES } from "@/lib/auth/roles";
 import { uuidSchema } from "@/lib/validation/common";
 import { PrintView } from "@/components/print/print-view";
+import { teamPageSize } from "@/lib/db/team";
 
 export const metadata: Metadata = { title: "Print" };
 
@@ -15,8 +16,9 @@ export default async function PrintPage({
   searchParams: Promise<{ runs?: string }>;
 }) {
   const { projectId } = await params;
-  await requirePageRole(ALL_ROLES, `/projects/${projectId}/print`);
+  const me = await requirePageRole(ALL_ROLES, `/projects/${projectId}/print`);
   if (!uuidSchema.safeParse(projectId).success) notFound();
   const { runs } = await searchParams;
-  return <PrintView projectId={projectId} initialRuns={runs ?? ""} />;
+  const pageSize = await teamPageSize(me.teamId);
+  return <PrintView projectId={projectId} initialRuns={runs ?? ""} role={me.role} pageSize={pageSize} />;
 }

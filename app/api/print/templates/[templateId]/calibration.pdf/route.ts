@@ -5,6 +5,9 @@ export const runtime = "nodejs";
 export const dynamic = "force-dynamic";
 
 /** A ruler and crop marks in the template's grid, to measure the printer's offset. */
-export const GET = route("GET /api/print/templates/[templateId]/calibration.pdf", async ({ params }) =>
-  pdfResponse(await calibrationPdf(params.templateId ?? ""), `calibration-${params.templateId}.pdf`),
+export const GET = route("GET /api/print/templates/[templateId]/calibration.pdf", async ({ me, params }) =>
+  pdfResponse(
+    await calibrationPdf(me.teamId, params.templateId ?? ""),
+    `calibration-${params.templateId}.pdf`,
+  ),
 );
