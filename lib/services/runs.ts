@@ -20,7 +20,7 @@ import { runCutLengthMm } from "@/lib/domain/cut-length";
 import type { TeamMe } from "@/lib/auth/guards";
 import type { Role } from "@/lib/auth/roles";
 import { traceCodeFromBytes } from "@/lib/domain/trace-code";
-import type { BenchState, RunData } from "@/lib/domain/types";
+import type { BenchState, DropClass, RunData } from "@/lib/domain/types";
 import { conflict, forbidden, invalid, notFound } from "@/lib/http/errors";
 import {
   runRuleIssues,
@@ -49,7 +49,11 @@ export async function createRuns(
   inputs: RunCreateInput[],
 ): Promise<RunRecord[]> {
   return db().transaction(async (tx) => {
-    const created = await createRunsInTx(tx, me, project, inputs);
+    const withDefaults = inputs.map((r) => ({
+      ...r,
+      dropClass: r.dropClass ?? (project.defaultDropClass as DropClass),
+    }));
+    const created = await createRunsInTx(tx, me, project, withDefaults);
     await touchProject(tx, project.id);
     return created;
   });

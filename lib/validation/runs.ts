@@ -158,7 +158,8 @@ function checkRunRules(v: Parameters<typeof runRuleIssues>[0], ctx: z.Refinement
 export const runCreateSchema = runFieldsObject
   .extend({
     hotSpace: z.boolean().default(false),
-    dropClass: z.enum(DROP_CLASSES).default("standard"),
+    // Absent: the project's default drop class.
+    dropClass: z.enum(DROP_CLASSES).optional(),
     returnKind: z.enum(RETURN_KINDS).default("same"),
     wireId: z
       .string()

@@ -71,6 +71,22 @@ describe("runs", () => {
     expect(many.body.items.map((r) => r.wireId)).toEqual(["RT-008", "RT-009"]);
   });
 
+  it("gives a new run the project's default drop class unless it names one", async () => {
+    const p = (
+      await lead.post<Project>("/api/projects", {
+        name: `Defaults ${Date.now()}`,
+        defaultDropClass: "critical",
+      })
+    ).body;
+    const plain = await lead.post<Run & { dropClass: string }>(`/api/projects/${p.id}/runs`, base);
+    expect(plain.body.dropClass).toBe("critical");
+    const named = await lead.post<Run & { dropClass: string }>(`/api/projects/${p.id}/runs`, {
+      ...base,
+      dropClass: "motor",
+    });
+    expect(named.body.dropClass).toBe("motor");
+  });
+
   it("refuses a wire-ID clash with 409 and writes nothing of the batch", async () => {
     const before = (await lead.get<{ total: number }>(`/api/projects/${project.id}/runs`)).body.total;
     const r = await lead.post<{ error: { code: string } }>(`/api/projects/${project.id}/runs`, {
