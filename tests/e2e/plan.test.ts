@@ -24,7 +24,6 @@ describe("the Spool plan screen", () => {
     expect(await summary.innerText()).toMatch(/Proven lower bound/i);
     expect(await page.getByRole("img", { name: /cuts, \d+ mm used of/ }).count()).toBeGreaterThan(5);
 
-    await page.getByText("draft", { exact: false }).first().waitFor();
     await page.getByRole("button", { name: "Commit plan" }).click();
     await page.getByText(/Committed: the shelf spools are reserved/).waitFor();
 
