@@ -8,6 +8,7 @@ const SECTIONS = [
   { href: "/checks", label: "Checks" },
   { href: "/plan", label: "Spool plan" },
   { href: "/print", label: "Print" },
+  { href: "/bench", label: "Bench" },
   { href: "/settings", label: "Settings" },
 ];
 

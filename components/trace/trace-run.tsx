@@ -4,6 +4,7 @@ import type { TraceView } from "@/lib/services/trace";
 import { ColourSwatch } from "@/components/ui/colour-swatch";
 import { StateBadge } from "@/components/runs/state-badge";
 import { VerdictBadge } from "@/components/checks/verdict-badge";
+import { TraceCut } from "@/components/trace/trace-cut";
 
 function End({
   label,
@@ -69,6 +70,8 @@ export function TraceRun({ view }: { view: TraceView }) {
           <Item k="Fuse" v={run.fuseA !== null ? `${run.fuseA} A` : "none listed"} />
         </dl>
       </section>
+
+      <TraceCut cut={view.cut} />
 
       {checks ? (
         <section className="rounded-lg border border-line bg-white p-4" aria-label="Checks">

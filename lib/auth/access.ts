@@ -35,6 +35,9 @@ export const ROUTE_ACCESS = {
   "GET /api/plans/[planId]/purchases": ALL_ROLES,
   "POST /api/plans/[planId]/purchase-mail": LEAD_ONLY,
   "GET /api/plans/[planId]/cut-sheet.pdf": ALL_ROLES,
+  // The bench: everyone reads a plan's bench view; builders and leads open a plan's new put-up as a shelf spool.
+  "GET /api/plans/[planId]/bench": ALL_ROLES,
+  "POST /api/plans/[planId]/spools/[index]/open": ["lead", "builder"],
   "GET /api/print/templates/[templateId]/calibration.pdf": ALL_ROLES,
   "POST /api/projects/[projectId]/imports": LEAD_ONLY,
   "GET /api/projects/[projectId]/imports/[importId]": LEAD_ONLY,

@@ -7,6 +7,7 @@ import * as teamMail from "@/db/migrations/20261201000100_team_mail";
 import * as stock from "@/db/migrations/20261201000200_stock";
 import * as plans from "@/db/migrations/20261201000400_plans";
 import * as print from "@/db/migrations/20261201000410_print";
+import * as bench from "@/db/migrations/20261201000500_bench";
 import * as demo from "@/db/seeds/01_demo";
 import { seedStockIfEmpty } from "@/db/seeds/02_stock";
 
@@ -21,6 +22,7 @@ const MIGRATIONS: Record<string, Migration> = {
   "20261201000200_stock.ts": stock,
   "20261201000400_plans.ts": plans,
   "20261201000410_print.ts": print,
+  "20261201000500_bench.ts": bench,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

@@ -28,6 +28,7 @@ import {
   type RunCreateInput,
   type RunPatchInput,
 } from "@/lib/validation/runs";
+import { applyBenchEffects, benchReplay, BENCH_PATCH_FIELDS } from "@/lib/services/bench";
 
 /** Next free wire IDs for a prefix: the highest number already used after the prefix, plus one, zero-padded. */
 export function nextWireIds(prefix: string, taken: Iterable<string>, count: number): string[] {
@@ -106,7 +107,7 @@ const TECHNICIAN_STATES: readonly BenchState[] = ["terminated", "tested", "faile
 function checkFieldsForRole(role: Role, input: RunPatchInput): void {
   if (role === "lead") return;
   const fields = Object.keys(input).filter((k) => k !== "version");
-  const extra = fields.filter((f) => f !== "state");
+  const extra = fields.filter((f) => f !== "state" && !BENCH_PATCH_FIELDS.includes(f));
   if (extra.length) throw forbidden(`Your role may not change ${extra.join(", ")}.`);
   const allowed = role === "builder" ? BUILDER_STATES : TECHNICIAN_STATES;
   if (input.state && !allowed.includes(input.state)) {
@@ -124,12 +125,14 @@ export async function patchRun(
   return db().transaction(async (tx) => {
     const current = await getRunForUpdate(tx, me.teamId, project.id, runId);
     if (!current) throw notFound("That run");
+    const replayed = await benchReplay(tx, me, current, input);
+    if (replayed) return replayed;
     if (current.version !== input.version) {
       throw conflict("Someone else changed this run since you opened it. Here is the current record.", {
         current,
       });
     }
-    const { version, ...changes } = input;
+    const { version, spoolId: _spoolId, actionId: _actionId, note: _note, ...changes } = input;
     const merged = { ...current, ...changes };
     const issues = runRuleIssues(merged);
     if (issues.length) throw invalid(`Invalid input: ${issues[0]!.path}: ${issues[0]!.message}`, issues);
@@ -146,13 +149,14 @@ export async function patchRun(
     if (!updated) {
       throw conflict("Someone else changed this run since you opened it.", { current });
     }
+    const bench = await applyBenchEffects(tx, me, project, current, updated, input);
     await recordAudit(tx, {
       teamId: me.teamId,
       actorUserId: me.user.id,
       action: changes.state && Object.keys(changed).length === 1 ? "run.state" : "run.update",
       entityType: "run",
       entityId: runId,
-      detail: { projectId: project.id, wireId: updated.wireId, changed },
+      detail: { projectId: project.id, wireId: updated.wireId, changed, ...bench },
     });
     await touchProject(tx, project.id);
     return updated;

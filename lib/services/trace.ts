@@ -8,6 +8,7 @@ import { notFound } from "@/lib/http/errors";
 import { requireProject } from "@/lib/services/projects";
 import { projectChecks } from "@/lib/services/checks";
 import { withCutLength, type RunView } from "@/lib/services/runs";
+import { traceCut, type TraceCutView } from "@/lib/services/bench";
 
 export interface TraceView {
   run: RunView;
@@ -15,6 +16,8 @@ export interface TraceView {
   checks: RunChecks | null;
   history: AuditEventView[];
   related: Pick<RunRecord, "id" | "wireId" | "endA" | "endB" | "circuit" | "traceCode">[];
+  /** Which spool the run was cut from, by whom and when (null until cut). */
+  cut: TraceCutView | null;
 }
 
 const device = (ref: string) => ref.split(":")[0]!.trim();
@@ -26,10 +29,11 @@ export async function traceRun(teamId: string, rawCode: string): Promise<TraceVi
   if (!found) throw notFound("A run of your team with that code");
   const { projectName, ...run } = found;
   const project = await requireProject(teamId, run.projectId);
-  const [checks, history, related] = await Promise.all([
+  const [checks, history, related, cut] = await Promise.all([
     projectChecks(teamId, project),
     listEntityEvents(db(), teamId, "run", run.id),
     runsOnDevices(teamId, run.projectId, [...new Set([device(run.endA), device(run.endB)])], run.id),
+    traceCut(teamId, run.id),
   ]);
   return {
     run: withCutLength(project, [run])[0]!,
@@ -37,5 +41,6 @@ export async function traceRun(teamId: string, rawCode: string): Promise<TraceVi
     checks: checks.runs[run.wireId] ?? null,
     history,
     related,
+    cut,
   };
 }

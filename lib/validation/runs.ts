@@ -190,6 +190,10 @@ export const runPatchSchema = runFieldsObject.partial().extend({
   version: z.coerce.number().int().min(1),
   wireId: wireIdSchema.optional(),
   state: z.enum(BENCH_STATES).optional(),
+  // Bench records sent with a state change: the spool a cut came from, and a client-made id against replays.
+  spoolId: z.uuid({ message: "Not a valid id." }).optional(),
+  actionId: z.uuid({ message: "Not a valid id." }).optional(),
+  note: z.string().trim().max(500).optional(),
 });
 export type RunPatchInput = z.infer<typeof runPatchSchema>;
 
