@@ -89,14 +89,27 @@ async function main() {
     console.log("  target: a page of 200 in < 50 ms");
 
     // 3. Electrical checks of all 5,000 runs through the endpoint (computed on every request).
+    // The first call computes; later calls reuse the result until a run or a setting changes.
     const checkTimes: number[] = [];
+    let coldMs = 0;
     for (let round = 0; round < 15; round++) {
       const t = performance.now();
       const r = await lead.get<{ total: number }>(`/api/projects/${p5}/checks`);
       if (r.status !== 200 || r.body.total !== 5000) throw new Error(`checks failed: ${r.status}`);
+      if (round === 0) coldMs = performance.now() - t;
       if (round >= 3) checkTimes.push(performance.now() - t);
     }
-    console.log(`checks endpoint, 5,000 runs: median ${median(checkTimes).toFixed(0)} ms (target < 500 ms)`);
+    // A changed run makes the next call compute again.
+    const one = (
+      await lead.get<{ items: { id: string; version: number }[] }>(`/api/projects/${p5}/runs?limit=1`)
+    ).body.items[0]!;
+    await lead.patch(`/api/projects/${p5}/runs/${one.id}`, { version: one.version, notes: "bench" });
+    const t2 = performance.now();
+    await lead.get(`/api/projects/${p5}/checks`);
+    const afterEditMs = performance.now() - t2;
+    console.log(
+      `checks endpoint, 5,000 runs: first ${coldMs.toFixed(0)} ms, after an edit ${afterEditMs.toFixed(0)} ms, unchanged median ${median(checkTimes).toFixed(0)} ms (target < 500 ms)`,
+    );
   } finally {
     await server.stop();
   }

@@ -4,8 +4,16 @@ export function toSnake(name: string): string {
   return name.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`);
 }
 
+// Column names repeat on every row: convert each name once.
+const camelCache = new Map<string, string>();
+
 export function toCamel(name: string): string {
-  return name.replace(/_([a-z0-9])/g, (_m, c: string) => c.toUpperCase());
+  let out = camelCache.get(name);
+  if (out === undefined) {
+    out = name.replace(/_([a-z0-9])/g, (_m, c: string) => c.toUpperCase());
+    if (camelCache.size < 10_000) camelCache.set(name, out);
+  }
+  return out;
 }
 
 function isPlainObject(v: unknown): v is Record<string, unknown> {

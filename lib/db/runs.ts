@@ -133,8 +133,9 @@ export type RunInsert = RunData & { traceCode: string };
 
 export async function insertRuns(tx: Tx, projectId: string, runs: RunInsert[]): Promise<RunRecord[]> {
   const out: RunRecord[] = [];
-  for (let i = 0; i < runs.length; i += 500) {
-    const chunk = runs.slice(i, i + 500).map((r) => ({ ...r, projectId }));
+  // 1,000 rows of 30 columns stay under PostgreSQL's 65,535 bind parameters per statement.
+  for (let i = 0; i < runs.length; i += 1000) {
+    const chunk = runs.slice(i, i + 1000).map((r) => ({ ...r, projectId }));
     out.push(
       ...((await tx("run")
         .insert(chunk)
@@ -242,4 +243,18 @@ export async function runsOnDevices(
     .select("r.id", "r.wireId", "r.endA", "r.endB", "r.circuit", "r.traceCode")
     .orderBy("r.wireId")
     .limit(100)) as Pick<RunRecord, "id" | "wireId" | "endA" | "endB" | "circuit" | "traceCode">[];
+}
+
+/** What changes whenever a run of the project is added, edited or removed: count, sum of versions, last update. */
+export async function runsRevision(
+  teamId: string,
+  projectId: string,
+  q: Db = db(),
+): Promise<{ count: number; versionSum: number; lastUpdatedAt: string | null }> {
+  const [row] = (await scoped(q, teamId, projectId).select(
+    q.raw("count(*)::int as count"),
+    q.raw("coalesce(sum(r.version), 0)::bigint as version_sum"),
+    q.raw("max(r.updated_at)::text as last_updated_at"),
+  )) as [{ count: number; versionSum: number; lastUpdatedAt: string | null }];
+  return row;
 }

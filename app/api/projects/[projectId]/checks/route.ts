@@ -15,7 +15,8 @@ export const GET = route("GET /api/projects/[projectId]/checks", async ({ me, pa
   return {
     summary: result.summary,
     cautions: result.cautions,
-    items: filtered.slice(q.offset, q.offset + q.limit),
+    // `findings` repeats `reasons` with a topic each; the screens need only the reasons, so they are left out.
+    items: filtered.slice(q.offset, q.offset + q.limit).map(({ findings: _f, ...rest }) => rest),
     total: filtered.length,
     limit: q.limit,
     offset: q.offset,
