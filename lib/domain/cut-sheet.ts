@@ -2,7 +2,7 @@
 
 import { colourName } from "./colour";
 import { PAGE_SIZES_MM, type Box } from "./marker-templates";
-import { chooseSymbol, dotMm, traceUrl, type SymbolGeometry, type SymbolSizer } from "./markers";
+import { chooseSymbol, dotMm, type SymbolGeometry, type SymbolSizer } from "./markers";
 
 export type CutSheetPageSize = "A4" | "Letter";
 
@@ -408,7 +408,9 @@ function cutRow(
       symbologies: ["datamatrix"],
       dataMatrixShapes: ["square"],
     },
-    { url: traceUrl(publicBaseUrl, cut.traceCode), code: cut.traceCode },
+    // The row's symbol carries the 8-character trace code, which the Bench scan field and the Scan screen read;
+    // a 2,000-cut sheet of URL symbols takes bwip-js several seconds to encode on two cores.
+    { url: cut.traceCode, code: cut.traceCode },
     sizer,
   );
   let symbol: CutSheetRow["symbol"] = null;

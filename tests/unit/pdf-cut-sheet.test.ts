@@ -11,7 +11,7 @@ import {
   type CutSheetInput,
   type CutSheetViewModel,
 } from "@/lib/domain/cut-sheet";
-import { traceCodeFromSeed, traceUrl } from "@/lib/domain/markers";
+import { traceCodeFromSeed } from "@/lib/domain/markers";
 import { createBarcodeEngine } from "@/lib/pdf/barcodes";
 import { buildCutSheetPdf } from "@/lib/pdf/cut-sheet";
 import { lineHeightPt } from "@/lib/pdf/fonts";
@@ -166,15 +166,18 @@ describe("cut sheet view model", () => {
     expect(priced.cost).toBeCloseTo(61.2, 9);
   });
 
-  it("puts a Data Matrix of the trace URL on every row, in whole 300 dpi dots", () => {
+  it("puts a Data Matrix of the trace code on every row, in whole 300 dpi dots", () => {
     for (const p of vm.pages) {
       for (const b of p.blocks) {
         if (b.kind !== "cut") continue;
         const s = b.row.symbol!;
         expect(s.symbology).toBe("datamatrix");
-        expect(s.payload).toBe(traceUrl(BASE, b.row.traceCode));
+        expect(s.payload).toBe(b.row.traceCode);
         expect(s.moduleMm).toBeGreaterThanOrEqual(0.25);
-        expect(s.dotsPerModule).toBe(3); // 3 × 25.4/300 = 0.254 mm (electrical.md §10)
+        // Whole dots of a 300 dpi printer, at least 0.25 mm: 3 dots = 0.254 mm (electrical.md §10).
+        expect(Number.isInteger(s.dotsPerModule)).toBe(true);
+        expect(s.dotsPerModule).toBeGreaterThanOrEqual(3);
+        expect(s.moduleMm).toBeCloseTo((s.dotsPerModule * 25.4) / 300, 9);
         // quiet zone of 1X (ISO/IEC 16022) stays inside the row
         expect(s.box.yMm - s.moduleMm).toBeGreaterThanOrEqual(b.yMm - 1e-9);
         expect(s.box.yMm + s.box.heightMm + s.moduleMm).toBeLessThanOrEqual(
@@ -290,7 +293,7 @@ describe("cut sheet PDF", () => {
     }
   });
 
-  it("prints Data Matrix symbols a reader decodes to the trace URLs", () => {
+  it("prints Data Matrix symbols a reader decodes to the trace codes", () => {
     const r = rendered[0]!;
     const page = r.vm.pages[0]!;
     tool("pdftoppm", [
@@ -320,7 +323,7 @@ describe("cut sheet PDF", () => {
       for (let y = 0; y < h; y++) px.copy(crop, y * w, (y0 + y) * width + x0, (y0 + y) * width + x0 + w);
       const file = path.join(dir, `${row.row.wireId}.pgm`);
       fs.writeFileSync(file, Buffer.concat([Buffer.from(`P5\n${w} ${h}\n255\n`), crop]));
-      expect(tool("dmtxread", ["-n", "-N", "1", file]).trim()).toBe(traceUrl(BASE, row.row.traceCode));
+      expect(tool("dmtxread", ["-n", "-N", "1", file]).trim()).toBe(row.row.traceCode);
     }
   });
 });
