@@ -3,6 +3,7 @@ import type { Knex } from "knex";
 import * as core from "@/db/migrations/20261201000001_core";
 import * as audit from "@/db/migrations/20261201000002_audit";
 import * as imports from "@/db/migrations/20261201000003_imports";
+import * as runTests from "@/db/migrations/20261201000300_run_tests";
 import * as demo from "@/db/seeds/01_demo";
 
 type Migration = { up: (k: Knex) => Promise<void>; down: (k: Knex) => Promise<void> };
@@ -12,6 +13,7 @@ const MIGRATIONS: Record<string, Migration> = {
   "20261201000001_core.ts": core,
   "20261201000002_audit.ts": audit,
   "20261201000003_imports.ts": imports,
+  "20261201000300_run_tests.ts": runTests,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

@@ -1,7 +1,10 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { makeKnex } from "@/lib/db/knex";
 import { migrateLatest, rollbackAll, seedDemo } from "@/lib/db/migrations";
-import { scratchDatabase } from "../helpers/db";
+import { scratchDatabase, testDatabaseUrl } from "../helpers/db";
+
+// Named after this run's test database, so engineers testing side by side on one cluster never share it.
+const SCRATCH = `${new URL(testDatabaseUrl()).pathname.slice(1)}_scratch_migrate`;
 
 const tables = async (k: ReturnType<typeof makeKnex>) =>
   (
@@ -17,11 +20,19 @@ describe("migrations and seed", () => {
   });
 
   it("migrate up, down and up again", async () => {
-    k = makeKnex(await scratchDatabase("loomwright_scratch_migrate"), { camel: false, poolMax: 2 });
+    k = makeKnex(await scratchDatabase(SCRATCH), { camel: false, poolMax: 2 });
     await migrateLatest(k);
     const first = await tables(k);
     expect(first).toEqual(
-      expect.arrayContaining(["team", "app_user", "membership", "user_session", "project", "run"]),
+      expect.arrayContaining([
+        "team",
+        "app_user",
+        "membership",
+        "user_session",
+        "project",
+        "run",
+        "run_test",
+      ]),
     );
     await rollbackAll(k);
     expect(await tables(k)).toEqual([]);
