@@ -23,6 +23,9 @@ export function AppHeader({
           <Link href="/projects" className="rounded px-3 py-1.5 font-semibold hover:bg-white/10">
             Projects
           </Link>
+          <Link href="/scan" className="rounded px-3 py-1.5 font-semibold hover:bg-white/10">
+            Scan
+          </Link>
         </nav>
         <div className="ml-auto flex items-center gap-3 text-sm">
           <span className="hidden text-paper/80 sm:inline">{teamName ?? "No team"}</span>
