@@ -6,6 +6,7 @@ import { usePathname } from "next/navigation";
 const SECTIONS = [
   { href: "", label: "Runs" },
   { href: "/checks", label: "Checks" },
+  { href: "/progress", label: "Progress" },
 ];
 
 export function ProjectNav({ projectId }: { projectId: string }) {
