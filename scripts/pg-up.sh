@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # Starts a project-local PostgreSQL cluster on 127.0.0.1 (installing Debian's package when missing). Idempotent.
 # Usage: scripts/pg-up.sh [dbname ...]   Prints DATABASE_URL lines for the databases it made sure exist.
-# Env: PGPORT_LOOMWRIGHT (default 54329), PGDATA_LOOMWRIGHT (data dir override).
+# Env: PGPORT_LOOMWRIGHT (default 54329), PGDATA_LOOMWRIGHT (data dir override), PGDATA_RECORD=0 (do not record the
+# data dir in .pgdata.path, for a throwaway second cluster that pg-down.sh must not stop).
 set -euo pipefail
 ROOT="$(cd "$(dirname "$0")/.." && pwd)"
 PORT="${PGPORT_LOOMWRIGHT:-54329}"
@@ -35,7 +36,7 @@ else
   HASH=$(printf '%s' "$ROOT" | sha1sum | cut -c1-12)
   PGDATA="${TMPDIR:-/tmp}/loomwright-pgdata-$HASH"
 fi
-echo "$PGDATA" > "$ROOT/.pgdata.path"
+[ "${PGDATA_RECORD:-1}" = "0" ] || echo "$PGDATA" > "$ROOT/.pgdata.path"
 
 if [ ! -f "$PGDATA/PG_VERSION" ]; then
   mkdir -p "$PGDATA"

@@ -45,6 +45,9 @@ export function AppHeader({
               Mailbox
             </Link>
           ) : null}
+          <Link href="/scan" className={link}>
+            Scan
+          </Link>
         </nav>
         <div className="ml-auto flex items-center gap-3 text-sm">
           <span className="hidden text-paper/80 sm:inline">{teamName ?? "No team"}</span>

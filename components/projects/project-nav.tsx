@@ -9,6 +9,7 @@ const SECTIONS = [
   { href: "/plan", label: "Spool plan" },
   { href: "/print", label: "Print" },
   { href: "/bench", label: "Bench" },
+  { href: "/progress", label: "Progress" },
   { href: "/settings", label: "Settings" },
 ];
 

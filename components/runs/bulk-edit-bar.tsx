@@ -5,6 +5,8 @@ import { sendJson } from "@/lib/client/fetcher";
 import type { RunView as RunRecord } from "@/lib/services/runs";
 import type { Role } from "@/lib/auth/roles";
 import { BENCH_STATES } from "@/lib/domain/types";
+// Test results (tested, failed) are recorded one run at a time, with their value, on the trace page.
+import { isTestState, statesRoleMaySet } from "@/lib/domain/bench-state";
 import { runBulkPatchSchema } from "@/lib/validation/runs";
 import { Button, buttonClass } from "@/components/ui/button";
 
@@ -86,9 +88,11 @@ export function BulkEditBar(props: {
             className="h-9 rounded-md border border-line-strong bg-white px-2 text-sm capitalize"
           >
             <option value="">Choose…</option>
-            {BENCH_STATES.map((s) => (
-              <option key={s}>{s}</option>
-            ))}
+            {BENCH_STATES.filter((s) => statesRoleMaySet(props.role).includes(s) && !isTestState(s)).map(
+              (s) => (
+                <option key={s}>{s}</option>
+              ),
+            )}
           </select>
         ) : (
           <input

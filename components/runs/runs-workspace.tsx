@@ -29,6 +29,7 @@ import { VerdictBadge } from "@/components/checks/verdict-badge";
 import { useChecks } from "@/lib/client/use-checks";
 import type { Verdict } from "@/lib/domain/checks";
 import { StateBadge } from "@/components/runs/state-badge";
+import { TestBadge } from "@/components/runs/test-badge";
 import { RunDrawer } from "@/components/runs/run-drawer";
 import { BulkEditBar } from "@/components/runs/bulk-edit-bar";
 
@@ -56,6 +57,7 @@ const RUN_COLUMNS = [
   { id: "fuseA", header: "Fuse (A)", width: 90, editable: true },
   { id: "state", header: "State", width: 110, editable: false },
   { id: "verdict", header: "Check", width: 90, editable: false },
+  { id: "lastTest", header: "Test", width: 150, editable: false },
 ] as const;
 type ColumnId = (typeof RUN_COLUMNS)[number]["id"];
 
@@ -73,11 +75,17 @@ const columns = col.columns([
   col.accessor((r) => r.fuseA ?? -1, { id: "fuseA", header: "Fuse (A)", sortDescFirst: false }),
   col.accessor((r) => BENCH_STATES.indexOf(r.state), { id: "state", header: "State", sortDescFirst: false }),
   col.accessor("wireId", { id: "verdict", header: "Check", enableSorting: false }),
+  // Sorted: no test first, then failed, then passed.
+  col.accessor((r) => (r.lastTest ? (r.lastTest.passed ? 2 : 1) : 0), {
+    id: "lastTest",
+    header: "Test",
+    sortDescFirst: false,
+  }),
 ]);
 
 const NUMERIC: ReadonlySet<ColumnId> = new Set([...NUMERIC_FIELDS, "cutLengthMm"]);
 
-function display(run: RunRecord, id: Exclude<ColumnId, "verdict">): string {
+function display(run: RunRecord, id: Exclude<ColumnId, "verdict" | "lastTest">): string {
   const v = run[id];
   if (v === null || v === undefined || v === "") return "—";
   if (typeof v === "number") return v.toLocaleString("en-GB");
@@ -85,7 +93,7 @@ function display(run: RunRecord, id: Exclude<ColumnId, "verdict">): string {
 }
 
 function editValue(run: RunRecord, id: ColumnId): string {
-  if (id === "verdict") return "";
+  if (id === "verdict" || id === "lastTest") return "";
   const v = run[id];
   return v === null || v === undefined ? "" : String(v);
 }
@@ -182,7 +190,12 @@ export function RunsWorkspace({ projectId, role }: { projectId: string; role: Ro
     if (!editing) return;
     const run = all.find((r) => r.id === editing.runId);
     if (!run) return setEditing(null);
-    if (editing.col === "verdict" || editValue(run, editing.col) === editing.value) return setEditing(null);
+    if (
+      editing.col === "verdict" ||
+      editing.col === "lastTest" ||
+      editValue(run, editing.col) === editing.value
+    )
+      return setEditing(null);
     const parsed = parseCellEdit(run, editing.col, editing.value);
     if (!parsed.ok) return setEditing({ ...editing, error: parsed.message });
     try {
@@ -569,6 +582,8 @@ function CellView({
       </button>
     );
   }
+  if (id === "lastTest")
+    return run.lastTest ? <TestBadge test={run.lastTest} /> : <span className="text-ink-faint">—</span>;
   if (id === "colour") return <ColourSwatch code={run.colour} />;
   if (id === "state") return <StateBadge state={run.state} />;
   if (id === "endA" || id === "endB") return <span className="font-mono">{display(run, id)}</span>;

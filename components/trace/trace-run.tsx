@@ -5,6 +5,9 @@ import { ColourSwatch } from "@/components/ui/colour-swatch";
 import { StateBadge } from "@/components/runs/state-badge";
 import { VerdictBadge } from "@/components/checks/verdict-badge";
 import { TraceCut } from "@/components/trace/trace-cut";
+import { TestResultForm } from "@/components/trace/test-result-form";
+import { expectedContinuityOhm, formatTestValue, TEST_LABELS, type TestKind } from "@/lib/domain/bench-state";
+import type { RunTestRecord } from "@/lib/db/run-tests";
 
 function End({
   label,
@@ -34,10 +37,53 @@ const ACTIONS: Record<string, string> = {
   "run.update": "edited the run",
   "run.state": "changed the bench state",
   "run.bulk-update": "changed the run with others",
+  "run.test": "recorded a test",
 };
 
-export function TraceRun({ view }: { view: TraceView }) {
+type EventDetail = {
+  changed?: { state?: { from: unknown; to: unknown } };
+  test?: { kind: TestKind; passed: boolean; value: number | null };
+  note?: string;
+};
+
+/** One line of the history: who did what, with the state change, the test or the note it carried. */
+function describe(action: string, raw: Record<string, unknown>): string {
+  const d = raw as EventDetail;
+  if (action === "run.test" && d.test) {
+    const t = d.test;
+    return `recorded a ${TEST_LABELS[t.kind].toLowerCase()} test: ${t.passed ? "pass" : "fail"}, ${formatTestValue(t.kind, t.value)}`;
+  }
+  const st = d.changed?.state;
+  const base =
+    action === "run.state" && st
+      ? `set the state ${String(st.from)} → ${String(st.to)}`
+      : (ACTIONS[action] ?? action);
+  return d.note ? `${base} · “${d.note}”` : base;
+}
+
+function LatestTest({ test }: { test: RunTestRecord }) {
+  return (
+    <div
+      className={`rounded-lg border-2 p-4 ${test.passed ? "border-pass bg-pass-light" : "border-fail bg-fail-light"}`}
+      aria-label="Latest test"
+      role="group"
+    >
+      <p className="text-xs font-semibold uppercase tracking-wide text-ink-soft">Latest test</p>
+      <p className={`text-2xl font-bold ${test.passed ? "text-pass" : "text-fail"}`}>
+        {test.passed ? "✓ Pass" : "✗ Fail"} · {TEST_LABELS[test.kind]}
+      </p>
+      <p className="text-lg font-semibold tabular-nums">{formatTestValue(test.kind, test.value)}</p>
+      <p className="text-sm text-ink-soft">
+        {test.testedByName ?? "someone"} · {new Date(test.testedAt).toLocaleString("en-GB")}
+      </p>
+      {test.note ? <p className="mt-1 whitespace-pre-line text-sm">{test.note}</p> : null}
+    </div>
+  );
+}
+
+export function TraceRun({ view, canTest = false }: { view: TraceView; canTest?: boolean }) {
   const { run, checks } = view;
+  const latest = view.tests[0] ?? null;
   return (
     <article className="flex flex-col gap-4" aria-label={`Wire ${run.wireId}`}>
       <header className="rounded-lg bg-ink p-5 text-paper">
@@ -53,6 +99,46 @@ export function TraceRun({ view }: { view: TraceView }) {
           <span className="text-paper/70">code {run.traceCode}</span>
         </div>
       </header>
+
+      <section className="flex flex-col gap-3" aria-label="Tests">
+        {latest ? (
+          <LatestTest test={latest} />
+        ) : (
+          <p className="rounded-lg border border-dashed border-line-strong bg-white/60 p-4 text-sm text-ink-soft">
+            Not tested yet.
+          </p>
+        )}
+        {canTest ? (
+          <TestResultForm
+            projectId={view.project.id}
+            runId={run.id}
+            wireId={run.wireId}
+            version={run.version}
+            state={run.state}
+            expectedOhm={expectedContinuityOhm(run.gauge, run.cutLengthMm)}
+          />
+        ) : null}
+        {view.tests.length > 1 ? (
+          <div className="rounded-lg border border-line bg-white p-4">
+            <h2 className="mb-2 font-semibold">Test history</h2>
+            <ol className="flex flex-col divide-y divide-line/70 text-sm" aria-label="Test history">
+              {view.tests.map((t) => (
+                <li key={t.id} className="flex flex-wrap items-baseline gap-x-3 py-1.5">
+                  <span className={`font-semibold ${t.passed ? "text-pass" : "text-fail"}`}>
+                    {t.passed ? "Pass" : "Fail"}
+                  </span>
+                  <span>{TEST_LABELS[t.kind]}</span>
+                  <span className="tabular-nums">{formatTestValue(t.kind, t.value)}</span>
+                  <span className="text-ink-faint">
+                    {t.testedByName ?? "someone"} · {new Date(t.testedAt).toLocaleString("en-GB")}
+                  </span>
+                  {t.note ? <span className="w-full text-ink-soft">{t.note}</span> : null}
+                </li>
+              ))}
+            </ol>
+          </div>
+        ) : null}
+      </section>
 
       <section className="grid gap-3 sm:grid-cols-2" aria-label="Ends">
         <End label="End A" reference={run.endA} termination={run.endATermination} stripMm={run.endAStripMm} />
@@ -112,7 +198,7 @@ export function TraceRun({ view }: { view: TraceView }) {
               <li key={h.id}>
                 <time className="text-ink-faint">{new Date(h.createdAt).toLocaleString("en-GB")}</time> ·{" "}
                 <span className="font-semibold">{h.actorName ?? "someone"}</span>{" "}
-                {ACTIONS[h.action] ?? h.action}
+                {describe(h.action, h.detail)}
               </li>
             ))}
           </ol>

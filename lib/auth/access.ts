@@ -21,6 +21,7 @@ export const ROUTE_ACCESS = {
   "POST /api/projects/[projectId]/runs/bulk": ALL_ROLES,
   "GET /api/projects/[projectId]/runs/export": ALL_ROLES,
   "GET /api/projects/[projectId]/checks": ALL_ROLES,
+  "GET /api/projects/[projectId]/progress": ALL_ROLES,
   "GET /api/trace/[code]": ALL_ROLES,
   "GET /api/projects/[projectId]/markers.pdf": ALL_ROLES,
   "GET /api/print/templates": ALL_ROLES,
@@ -44,7 +45,8 @@ export const ROUTE_ACCESS = {
   "PATCH /api/projects/[projectId]/imports/[importId]": LEAD_ONLY,
   "POST /api/projects/[projectId]/imports/[importId]/commit": LEAD_ONLY,
   "GET /api/projects/[projectId]/runs/[runId]": ALL_ROLES,
-  // Builders and technicians may change a run's state only; the service checks which fields each role sends.
+  // Builders and technicians may change a run's state (technicians with a test result); the service checks which
+  // fields each role sends and which state changes it may make.
   "PATCH /api/projects/[projectId]/runs/[runId]": ALL_ROLES,
   "DELETE /api/projects/[projectId]/runs/[runId]": LEAD_ONLY,
   "POST /api/auth/password-reset": "public",

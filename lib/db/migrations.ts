@@ -8,6 +8,7 @@ import * as stock from "@/db/migrations/20261201000200_stock";
 import * as plans from "@/db/migrations/20261201000400_plans";
 import * as print from "@/db/migrations/20261201000410_print";
 import * as bench from "@/db/migrations/20261201000500_bench";
+import * as runTests from "@/db/migrations/20261201000300_run_tests";
 import * as demo from "@/db/seeds/01_demo";
 import { seedStockIfEmpty } from "@/db/seeds/02_stock";
 
@@ -23,6 +24,7 @@ const MIGRATIONS: Record<string, Migration> = {
   "20261201000400_plans.ts": plans,
   "20261201000410_print.ts": print,
   "20261201000500_bench.ts": bench,
+  "20261201000300_run_tests.ts": runTests,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

@@ -20,7 +20,12 @@ export function traceCodeFromBytes(bytes: Uint8Array): string {
 export function normaliseTraceCode(input: string): string | null {
   let s = input.trim();
   const slash = s.lastIndexOf("/r/");
-  if (slash >= 0) s = s.slice(slash + 3);
+  // A trace URL: the code is the path segment after /r/ (a query, fragment or trailing slash is dropped).
+  if (slash >= 0)
+    s = s
+      .slice(slash + 3)
+      .replace(/[?#][\s\S]*$/, "")
+      .replace(/\/+$/, "");
   s = s.toUpperCase().replace(/[-\s]/g, "").replace(/[IL]/g, "1").replace(/O/g, "0");
   if (s.length !== TRACE_CODE_LENGTH) return null;
   for (const c of s) if (!ALPHABET.includes(c)) return null;

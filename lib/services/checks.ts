@@ -6,6 +6,8 @@ import { listAllRuns, runsRevision } from "@/lib/db/runs";
 
 const cache = new Map<string, { key: string; result: ChecksResult }>();
 const MAX_CACHED_PROJECTS = 50;
+import type { RunChecks } from "@/lib/domain/checks";
+import type { ProjectSettings, RunData } from "@/lib/domain/types";
 
 export async function projectChecks(teamId: string, project: ProjectRecord): Promise<ChecksResult> {
   const rev = await runsRevision(teamId, project.id);
@@ -16,4 +18,16 @@ export async function projectChecks(teamId: string, project: ProjectRecord): Pro
   if (cache.size >= MAX_CACHED_PROJECTS) cache.delete(cache.keys().next().value!);
   cache.set(project.id, { key, result });
   return result;
+}
+
+/**
+ * One run's checks from the run and the only other runs they read (`linked`: its return run and the runs that
+ * use it as their return): the same result the whole project's checks give for it, without reading every run.
+ */
+export function checksOfRunWith(
+  run: RunData,
+  linked: readonly RunData[],
+  settings: ProjectSettings,
+): RunChecks | null {
+  return computeChecks([run, ...linked], settings).runs[run.wireId] ?? null;
 }

@@ -20,7 +20,9 @@ import { runCutLengthMm } from "@/lib/domain/cut-length";
 import type { TeamMe } from "@/lib/auth/guards";
 import type { Role } from "@/lib/auth/roles";
 import { traceCodeFromBytes } from "@/lib/domain/trace-code";
-import type { BenchState, DropClass, RunData } from "@/lib/domain/types";
+import type { DropClass, RunData } from "@/lib/domain/types";
+import { isTestState, stateChangeRefusal, statesRoleMaySet, TEST_UNITS } from "@/lib/domain/bench-state";
+import { insertRunTest, latestRunTests, type RunTestRecord } from "@/lib/db/run-tests";
 import { conflict, forbidden, invalid, notFound } from "@/lib/http/errors";
 import {
   runRuleIssues,
@@ -100,18 +102,45 @@ export async function createRunsInTx(
   return created;
 }
 
-const BUILDER_STATES: readonly BenchState[] = ["planned", "cut", "marked", "terminated"];
-const TECHNICIAN_STATES: readonly BenchState[] = ["terminated", "tested", "failed"];
-
-/** Which fields each role may change on a run (PRODUCT.md §2): the lead any; builders and technicians the state. */
+/**
+ * Which fields each role may send (PRODUCT.md §2): the lead any; a builder a bench state, with a note; a
+ * technician a state, and the test kind, value and note only together with a test state (tested or failed).
+ */
 function checkFieldsForRole(role: Role, input: RunPatchInput): void {
   if (role === "lead") return;
   const fields = Object.keys(input).filter((k) => k !== "version");
-  const extra = fields.filter((f) => f !== "state" && !BENCH_PATCH_FIELDS.includes(f));
+  const allowed =
+    role === "builder"
+      ? ["state", "note", ...BENCH_PATCH_FIELDS]
+      : ["state", "testKind", "testValue", "note"];
+  const extra = fields.filter((f) => !allowed.includes(f));
   if (extra.length) throw forbidden(`Your role may not change ${extra.join(", ")}.`);
-  const allowed = role === "builder" ? BUILDER_STATES : TECHNICIAN_STATES;
-  if (input.state && !allowed.includes(input.state)) {
+  if (input.state && !statesRoleMaySet(role).includes(input.state)) {
     throw forbidden(`Your role may not set a run to "${input.state}".`);
+  }
+  const describing = fields.filter((f) => f !== "state");
+  if (describing.length && !input.state) {
+    throw forbidden(`Your role may send ${describing.join(", ")} only together with a state.`);
+  }
+  if (role === "technician" && describing.length && input.state && !isTestState(input.state)) {
+    throw forbidden(
+      `A technician sends ${describing.join(", ")} only with a test result (tested or failed).`,
+    );
+  }
+}
+
+/** A test state needs its kind; a test kind or value needs a test state (any role). */
+function checkTestFields(input: RunPatchInput): void {
+  const testing = input.state !== undefined && isTestState(input.state);
+  if (testing && !input.testKind) {
+    throw invalid("Invalid input: testKind: say which test was made (continuity or insulation)", [
+      { path: "testKind", message: "Say which test was made (continuity or insulation)" },
+    ]);
+  }
+  if (!testing && (input.testKind !== undefined || input.testValue !== undefined)) {
+    throw invalid("Invalid input: state: a test result sets the state to tested (pass) or failed", [
+      { path: "state", message: "A test result sets the state to tested (pass) or failed" },
+    ]);
   }
 }
 
@@ -122,6 +151,7 @@ export async function patchRun(
   input: RunPatchInput,
 ): Promise<RunRecord> {
   checkFieldsForRole(me.role, input);
+  checkTestFields(input);
   return db().transaction(async (tx) => {
     const current = await getRunForUpdate(tx, me.teamId, project.id, runId);
     if (!current) throw notFound("That run");
@@ -132,7 +162,11 @@ export async function patchRun(
         current,
       });
     }
-    const { version, spoolId: _spoolId, actionId: _actionId, note: _note, ...changes } = input;
+    const { version, testKind, testValue, note, spoolId: _spoolId, actionId: _actionId, ...changes } = input;
+    if (changes.state) {
+      const refusal = stateChangeRefusal(me.role, current.state, changes.state);
+      if (refusal) throw forbidden(refusal);
+    }
     const merged = { ...current, ...changes };
     const issues = runRuleIssues(merged);
     if (issues.length) throw invalid(`Invalid input: ${issues[0]!.path}: ${issues[0]!.message}`, issues);
@@ -150,13 +184,38 @@ export async function patchRun(
       throw conflict("Someone else changed this run since you opened it.", { current });
     }
     const bench = await applyBenchEffects(tx, me, project, current, updated, input);
+    const detail: Record<string, unknown> = {
+      projectId: project.id,
+      wireId: updated.wireId,
+      changed,
+      ...bench,
+    };
+    let action = changes.state && Object.keys(changed).length === 1 ? "run.state" : "run.update";
+    if (testKind && changes.state) {
+      const test = {
+        kind: testKind,
+        passed: changes.state === "tested",
+        value: testValue ?? null,
+        note: note ?? null,
+      };
+      const id = await insertRunTest(tx, {
+        runId,
+        ...test,
+        testedBy: me.user.id,
+        runVersion: updated.version,
+      });
+      detail.test = { id, ...test, unit: TEST_UNITS[testKind] };
+      action = "run.test";
+    } else if (note) {
+      detail.note = note;
+    }
     await recordAudit(tx, {
       teamId: me.teamId,
       actorUserId: me.user.id,
-      action: changes.state && Object.keys(changed).length === 1 ? "run.state" : "run.update",
+      action,
       entityType: "run",
       entityId: runId,
-      detail: { projectId: project.id, wireId: updated.wireId, changed, ...bench },
+      detail,
     });
     await touchProject(tx, project.id);
     return updated;
@@ -187,6 +246,13 @@ export async function bulkPatchRuns(
   input: RunBulkPatchInput,
 ): Promise<RunRecord[]> {
   checkFieldsForRole(me.role, { version: 1, ...input.changes } as RunPatchInput);
+  const target = input.changes.state;
+  if (target && isTestState(target)) {
+    throw invalid(
+      "A test result is recorded one run at a time, with its test and value, on the run's trace page.",
+      [{ path: "changes.state", message: "Record tested or failed one run at a time" }],
+    );
+  }
   return db().transaction(async (tx) => {
     const ids = [...new Set(input.items.map((i) => i.id))];
     const current = await lockRuns(tx, me.teamId, project.id, ids);
@@ -200,6 +266,12 @@ export async function bulkPatchRuns(
           current: stale,
         },
       );
+    }
+    if (target) {
+      for (const r of current) {
+        const refusal = stateChangeRefusal(me.role, r.state, target);
+        if (refusal) throw forbidden(`${r.wireId}: ${refusal}`);
+      }
     }
     const updated = await updateRunsBulk(tx, ids, input.changes as Partial<RunData>);
     await recordAudits(
@@ -218,10 +290,23 @@ export async function bulkPatchRuns(
   });
 }
 
-export type RunView = RunRecord & { cutLengthMm: number };
+export type RunView = RunRecord & {
+  cutLengthMm: number;
+  /** The run's newest test result, where the response carries it (lists, single runs, edits). */
+  lastTest?: RunTestRecord | null;
+};
 
 /** Adds the cut length under the project's slack rule to each run (computed, never stored). */
 export function withCutLength(project: ProjectRecord, runs: RunRecord[]): RunView[] {
   const settings = settingsOf(project);
   return runs.map((r) => ({ ...r, cutLengthMm: runCutLengthMm(r, settings) }));
+}
+
+/** Adds each run's newest test result (null when it has none). */
+export async function withLastTests(teamId: string, runs: RunView[]): Promise<RunView[]> {
+  const latest = await latestRunTests(
+    teamId,
+    runs.map((r) => r.id),
+  );
+  return runs.map((r) => ({ ...r, lastTest: latest.get(r.id) ?? null }));
 }

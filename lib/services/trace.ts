@@ -1,44 +1,74 @@
-// What a scanned marker opens: the run behind a trace code, with its checks, history and neighbours.
+// What a scanned marker opens: the run behind a trace code, with its checks, tests, history and neighbours.
 import { db } from "@/lib/db/knex";
 import { listEntityEvents, type AuditEventView } from "@/lib/db/audit";
-import { findRunByTraceCode, runsOnDevices, type RunRecord } from "@/lib/db/runs";
+import { runsOnDevices, type RunRecord } from "@/lib/db/runs";
+import { findTraceRun, runsLinkedByReturn, type TraceRunRow } from "@/lib/db/trace";
+import { listRunTests, type RunTestRecord } from "@/lib/db/run-tests";
 import { normaliseTraceCode } from "@/lib/domain/trace-code";
+import { runCutLengthMm } from "@/lib/domain/cut-length";
 import type { RunChecks } from "@/lib/domain/checks";
 import { notFound } from "@/lib/http/errors";
-import { requireProject } from "@/lib/services/projects";
-import { projectChecks } from "@/lib/services/checks";
-import { withCutLength, type RunView } from "@/lib/services/runs";
+import { checksOfRunWith } from "@/lib/services/checks";
+import type { RunView } from "@/lib/services/runs";
 import { traceCut, type TraceCutView } from "@/lib/services/bench";
+
+export type RelatedRun = Pick<RunRecord, "id" | "wireId" | "endA" | "endB" | "circuit" | "traceCode">;
 
 export interface TraceView {
   run: RunView;
   project: { id: string; name: string };
   checks: RunChecks | null;
+  /** Test results, newest first (run.lastTest is the first). */
+  tests: RunTestRecord[];
   history: AuditEventView[];
-  related: Pick<RunRecord, "id" | "wireId" | "endA" | "endB" | "circuit" | "traceCode">[];
+  related: RelatedRun[];
   /** Which spool the run was cut from, by whom and when (null until cut). */
   cut: TraceCutView | null;
 }
 
 const device = (ref: string) => ref.split(":")[0]!.trim();
 
+// Views already built, per team and code, with the project row version they were built from. Each scan reads the
+// run and that version in one query; only when the project changed is the rest read again (four reads at once).
+const CACHE_MAX = 1000;
+const cache = new Map<string, { stamp: string; view: TraceView }>();
+
 export async function traceRun(teamId: string, rawCode: string): Promise<TraceView> {
   const code = normaliseTraceCode(rawCode);
   if (!code) throw notFound("A run with that code");
-  const found = await findRunByTraceCode(teamId, code);
-  if (!found) throw notFound("A run of your team with that code");
-  const { projectName, ...run } = found;
-  const project = await requireProject(teamId, run.projectId);
-  const [checks, history, related, cut] = await Promise.all([
-    projectChecks(teamId, project),
+  const head = await findTraceRun(teamId, code);
+  if (!head) throw notFound("A run of your team with that code");
+  const key = `${teamId}:${code}`;
+  const hit = cache.get(key);
+  if (hit && hit.stamp === head.stamp) {
+    cache.delete(key);
+    cache.set(key, hit);
+    return hit.view;
+  }
+  // Read after the stamp: a change in between only makes the next scan see a newer stamp and build again.
+  const view = await buildTraceView(teamId, head);
+  cache.delete(key);
+  cache.set(key, { stamp: head.stamp, view });
+  if (cache.size > CACHE_MAX) cache.delete(cache.keys().next().value!);
+  return view;
+}
+
+async function buildTraceView(teamId: string, head: TraceRunRow): Promise<TraceView> {
+  const { run, settings } = head;
+  const devices = [...new Set([device(run.endA), device(run.endB)])];
+  // The checks read only the runs this run's checks depend on: the same result as the whole project's checks.
+  const [linked, related, tests, history, cut] = await Promise.all([
+    runsLinkedByReturn(teamId, run.projectId, run),
+    runsOnDevices(teamId, run.projectId, devices, run.id),
+    listRunTests(teamId, run.id, db(), 100),
     listEntityEvents(db(), teamId, "run", run.id),
-    runsOnDevices(teamId, run.projectId, [...new Set([device(run.endA), device(run.endB)])], run.id),
     traceCut(teamId, run.id),
   ]);
   return {
-    run: withCutLength(project, [run])[0]!,
-    project: { id: run.projectId, name: projectName },
-    checks: checks.runs[run.wireId] ?? null,
+    run: { ...run, cutLengthMm: runCutLengthMm(run, settings), lastTest: tests[0] ?? null },
+    project: { id: run.projectId, name: head.projectName },
+    checks: checksOfRunWith(run, linked, settings),
+    tests,
     history,
     related,
     cut,

@@ -4,6 +4,7 @@ import { BENCH_STATES, DROP_CLASSES, RETURN_KINDS, TERMINATIONS } from "@/lib/do
 import { normaliseGauge } from "@/lib/domain/gauge";
 import { normaliseColour } from "@/lib/domain/colour";
 import { pagingSchema } from "@/lib/validation/common";
+import { TEST_KINDS } from "@/lib/domain/bench-state";
 
 export const RUN_SORT_FIELDS = [
   "wireId",
@@ -185,7 +186,11 @@ export const runCreateBodySchema = z.unknown().transform((body, ctx) => {
   return { many, runs: "runs" in r.data ? r.data.runs : [r.data] };
 });
 
-/** Edits: any subset of the fields, with the version the edit was made from (absent fields stay as they are). */
+/**
+ * Edits: any subset of the fields, with the version the edit was made from (absent fields stay as they are).
+ * Setting `tested` (pass) or `failed` records a test: `testKind`, and `testValue` in Ω (continuity) or MΩ
+ * (insulation); `note` goes with a state change into the audit trail (and onto the test result).
+ */
 export const runPatchSchema = runFieldsObject.partial().extend({
   version: z.coerce.number().int().min(1),
   wireId: wireIdSchema.optional(),
@@ -193,7 +198,9 @@ export const runPatchSchema = runFieldsObject.partial().extend({
   // Bench records sent with a state change: the spool a cut came from, and a client-made id against replays.
   spoolId: z.uuid({ message: "Not a valid id." }).optional(),
   actionId: z.uuid({ message: "Not a valid id." }).optional(),
-  note: z.string().trim().max(500).optional(),
+  testKind: z.enum(TEST_KINDS, { message: "A test is continuity or insulation" }).optional(),
+  testValue: optNumber(0, 1_000_000, "Test value").optional(),
+  note: optText(500).optional(),
 });
 export type RunPatchInput = z.infer<typeof runPatchSchema>;
 

@@ -37,6 +37,7 @@ describe("migrations and seed", () => {
         "put_up",
         "spool",
         "spool_adjustment",
+        "run_test",
       ]),
     );
     await rollbackAll(k);

@@ -24,7 +24,7 @@ export default async function TracePage({ params }: { params: Promise<{ code: st
       <Link href={`/projects/${view.project.id}`} className="text-sm text-ink-soft hover:text-ink">
         ← {view.project.name}
       </Link>
-      <TraceRun view={view} />
+      <TraceRun view={view} canTest={me.role === "technician" || me.role === "lead"} />
     </div>
   );
 }

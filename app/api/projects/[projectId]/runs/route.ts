@@ -1,6 +1,6 @@
 import { json, readJson, readQuery, route } from "@/lib/http/handler";
 import { requireProject } from "@/lib/services/projects";
-import { createRuns, withCutLength } from "@/lib/services/runs";
+import { createRuns, withCutLength, withLastTests } from "@/lib/services/runs";
 import { listRuns } from "@/lib/db/runs";
 import { runCreateBodySchema, runListQuerySchema } from "@/lib/validation/runs";
 
@@ -11,7 +11,7 @@ export const GET = route("GET /api/projects/[projectId]/runs", async ({ me, para
   const project = await requireProject(me.teamId, params.projectId);
   const query = readQuery(req, runListQuerySchema);
   const page = await listRuns(me.teamId, project.id, query);
-  return { ...page, items: withCutLength(project, page.items) };
+  return { ...page, items: await withLastTests(me.teamId, withCutLength(project, page.items)) };
 });
 
 /** One run, or `{ runs: [...] }` for many, in one transaction. */

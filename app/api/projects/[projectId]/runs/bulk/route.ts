@@ -1,6 +1,6 @@
 import { readJson, route } from "@/lib/http/handler";
 import { requireProject } from "@/lib/services/projects";
-import { bulkPatchRuns, withCutLength } from "@/lib/services/runs";
+import { bulkPatchRuns, withCutLength, withLastTests } from "@/lib/services/runs";
 import { runBulkPatchSchema } from "@/lib/validation/runs";
 
 export const runtime = "nodejs";
@@ -10,5 +10,5 @@ export const dynamic = "force-dynamic";
 export const POST = route("POST /api/projects/[projectId]/runs/bulk", async ({ me, params, req }) => {
   const project = await requireProject(me.teamId, params.projectId);
   const updated = await bulkPatchRuns(me, project, await readJson(req, runBulkPatchSchema));
-  return { items: withCutLength(project, updated), total: updated.length };
+  return { items: await withLastTests(me.teamId, withCutLength(project, updated)), total: updated.length };
 });
