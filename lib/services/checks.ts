@@ -31,3 +31,11 @@ export function checksOfRunWith(
 ): RunChecks | null {
   return computeChecks([run, ...linked], settings).runs[run.wireId] ?? null;
 }
+
+/** A run's checks as the API answers them: `findings` repeats `reasons` with a topic each and is left out. */
+export type RunChecksView = Omit<RunChecks, "findings">;
+
+export function checksView(c: RunChecks): RunChecksView {
+  const { findings: _findings, ...rest } = c;
+  return rest;
+}

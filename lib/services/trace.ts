@@ -6,9 +6,8 @@ import { findTraceRun, runsLinkedByReturn, type TraceRunRow } from "@/lib/db/tra
 import { listRunTests, type RunTestRecord } from "@/lib/db/run-tests";
 import { normaliseTraceCode } from "@/lib/domain/trace-code";
 import { runCutLengthMm } from "@/lib/domain/cut-length";
-import type { RunChecks } from "@/lib/domain/checks";
 import { notFound } from "@/lib/http/errors";
-import { checksOfRunWith } from "@/lib/services/checks";
+import { checksOfRunWith, checksView, type RunChecksView } from "@/lib/services/checks";
 import type { RunView } from "@/lib/services/runs";
 import { traceCut, type TraceCutView } from "@/lib/services/bench";
 
@@ -17,7 +16,7 @@ export type RelatedRun = Pick<RunRecord, "id" | "wireId" | "endA" | "endB" | "ci
 export interface TraceView {
   run: RunView;
   project: { id: string; name: string };
-  checks: RunChecks | null;
+  checks: RunChecksView | null;
   /** Test results, newest first (run.lastTest is the first). */
   tests: RunTestRecord[];
   history: AuditEventView[];
@@ -64,10 +63,11 @@ async function buildTraceView(teamId: string, head: TraceRunRow): Promise<TraceV
     listEntityEvents(db(), teamId, "run", run.id),
     traceCut(teamId, run.id),
   ]);
+  const runChecks = checksOfRunWith(run, linked, settings);
   return {
     run: { ...run, cutLengthMm: runCutLengthMm(run, settings), lastTest: tests[0] ?? null },
     project: { id: run.projectId, name: head.projectName },
-    checks: checksOfRunWith(run, linked, settings),
+    checks: runChecks ? checksView(runChecks) : null,
     tests,
     history,
     related,

@@ -1,6 +1,6 @@
 import { readQuery, route } from "@/lib/http/handler";
 import { requireProject } from "@/lib/services/projects";
-import { projectChecks } from "@/lib/services/checks";
+import { checksView, projectChecks } from "@/lib/services/checks";
 import { checksQuerySchema } from "@/lib/validation/checks";
 
 export const runtime = "nodejs";
@@ -15,8 +15,7 @@ export const GET = route("GET /api/projects/[projectId]/checks", async ({ me, pa
   return {
     summary: result.summary,
     cautions: result.cautions,
-    // `findings` repeats `reasons` with a topic each; the screens need only the reasons, so they are left out.
-    items: filtered.slice(q.offset, q.offset + q.limit).map(({ findings: _f, ...rest }) => rest),
+    items: filtered.slice(q.offset, q.offset + q.limit).map(checksView),
     total: filtered.length,
     limit: q.limit,
     offset: q.offset,
