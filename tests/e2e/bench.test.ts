@@ -54,7 +54,7 @@ afterAll(async () => {
 const metresIn = (text: string) => Number(/([\d.]+) m left/.exec(text)![1]);
 
 describe("the Bench screen on a phone", () => {
-  it("a builder records three cuts from a spool and sees its length go down; the trace page names the spool", async () => {
+  it("a builder records three cuts from a spool and sees its length go down; a technician sees the spool on the trace page and records a test", async () => {
     const { page } = browser;
     await signInAs(page, baseUrl, "builder@example.test");
     await page.goto(`${baseUrl}/projects/${projectId}/bench`);
@@ -87,5 +87,15 @@ describe("the Bench screen on a phone", () => {
     await cutSection.waitFor();
     const text = await cutSection.innerText();
     expect(text).toMatch(/Cut from spool lot LOT-E2E-9, location Rack 4 by .+ at /);
+
+    // The technician records a continuity test on the same page and sees it there.
+    const form = page.getByRole("region", { name: "Record a test" });
+    await form.getByLabel(/^Reading/).fill("0.05");
+    await form.getByRole("button", { name: "✓ Pass" }).click();
+    await page
+      .getByText(/tested/i)
+      .first()
+      .waitFor();
+    await page.waitForFunction(() => document.body.textContent?.includes("0.05 Ω"));
   });
 });
