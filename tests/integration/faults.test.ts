@@ -1,6 +1,7 @@
 // The database goes away during a session and comes back: the app answers 503 JSON meanwhile (pages show the
 // designed error page, never a stack), stays up, recovers by itself within 5 s, and loses nothing it committed.
 // It runs on a throwaway PostgreSQL cluster of its own (own port and data dir), never the shared one.
+import { createHash } from "node:crypto";
 import { createServer } from "node:net";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { resetDatabase } from "../helpers/db";
@@ -9,8 +10,10 @@ import { signedIn, type Client, type Reply } from "../helpers/http";
 import { throwawayCluster, type ThrowawayCluster } from "../helpers/pg-cluster";
 import { openBrowser, signInAs, type Browser } from "../helpers/browser";
 
-const PG_PORT = Number(process.env.FAULTS_PGPORT ?? 54339);
-const PG_DATA = process.env.FAULTS_PGDATA ?? `/tmp/lw-faults-pgdata-${PG_PORT}`;
+// Own port and data dir per checkout, so two checkouts' test runs on one machine never share the cluster.
+const PG_PORT = Number(process.env.FAULTS_PGPORT ?? Number(process.env.PGPORT_LOOMWRIGHT ?? 54329) + 10);
+const CHECKOUT = createHash("sha1").update(process.cwd()).digest("hex").slice(0, 10);
+const PG_DATA = process.env.FAULTS_PGDATA ?? `/tmp/lw-faults-pgdata-${CHECKOUT}-${PG_PORT}`;
 const DB = "loomwright_faults";
 
 type Run = { id: string; version: number; state: string; traceCode: string };
