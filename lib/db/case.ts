@@ -4,8 +4,16 @@ export function toSnake(name: string): string {
   return name.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`);
 }
 
+// Column names are few and repeat on every row of every result: each is converted once (a bounded cache).
+const camelNames = new Map<string, string>();
+
 export function toCamel(name: string): string {
-  return name.replace(/_([a-z0-9])/g, (_m, c: string) => c.toUpperCase());
+  let camel = camelNames.get(name);
+  if (camel === undefined) {
+    camel = name.replace(/_([a-z0-9])/g, (_m, c: string) => c.toUpperCase());
+    if (camelNames.size < 5000) camelNames.set(name, camel);
+  }
+  return camel;
 }
 
 function isPlainObject(v: unknown): v is Record<string, unknown> {

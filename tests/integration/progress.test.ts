@@ -76,7 +76,8 @@ describe("progress", () => {
     ]);
     expect(r.wireTypes[2]!.byState).toMatchObject({ tested: 1, failed: 1 });
 
-    const empty = (await lead.post<{ id: string }>("/api/projects", { name: `Progress empty ${Date.now()}` })).body;
+    const empty = (await lead.post<{ id: string }>("/api/projects", { name: `Progress empty ${Date.now()}` }))
+      .body;
     expect((await lead.get<Progress>(`/api/projects/${empty.id}/progress`)).body).toMatchObject({
       total: 0,
       builtPct: 0,

@@ -49,7 +49,8 @@ describe("team isolation", () => {
 
   it("lists runs with paging limits and field names of the API", async () => {
     const c = await signedIn(baseUrl, "builder@example.test");
-    const harrow = (await c.get<ProjectList>("/api/projects")).body.items[0]!;
+    // By name: other test files add projects that may sort before it.
+    const harrow = (await c.get<ProjectList>("/api/projects")).body.items.find((p) => p.name === "Harrow-3")!;
     const page = await c.get<{ items: Record<string, unknown>[]; total: number; limit: number }>(
       `/api/projects/${harrow.id}/runs?limit=10&offset=5&sort=routedLengthMm&dir=desc`,
     );

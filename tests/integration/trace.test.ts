@@ -14,9 +14,11 @@ type Trace = {
 describe("trace codes", () => {
   it("resolves a run's code for its team, with checks, history and runs on the same devices", async () => {
     const tech = await signedIn(baseUrl, "technician@example.test");
-    const projects = await tech.get<{ items: { id: string }[] }>("/api/projects");
+    const projects = await tech.get<{ items: { id: string; name: string }[] }>("/api/projects");
+    // By name: other test files add projects that may sort before it.
+    const harrow = projects.body.items.find((p) => p.name === "Harrow-3")!;
     const runs = await tech.get<{ items: { wireId: string; traceCode: string }[] }>(
-      `/api/projects/${projects.body.items[0]!.id}/runs?limit=1000`,
+      `/api/projects/${harrow.id}/runs?limit=1000`,
     );
     const run = runs.body.items.find((r) => r.wireId === "HR3-047")!;
     const r = await tech.get<Trace>(`/api/trace/${run.traceCode}`);
@@ -38,9 +40,10 @@ describe("trace codes", () => {
 
   it("never shows a run to another team or to anonymous callers", async () => {
     const lead = await signedIn(baseUrl, "lead@example.test");
-    const projects = await lead.get<{ items: { id: string }[] }>("/api/projects");
+    const projects = await lead.get<{ items: { id: string; name: string }[] }>("/api/projects");
+    const harrow = projects.body.items.find((p) => p.name === "Harrow-3")!;
     const runs = await lead.get<{ items: { traceCode: string }[] }>(
-      `/api/projects/${projects.body.items[0]!.id}/runs?limit=1`,
+      `/api/projects/${harrow.id}/runs?limit=1`,
     );
     const code = runs.body.items[0]!.traceCode;
     expect((await new Client(baseUrl).get(`/api/trace/${code}`)).status).toBe(401);
