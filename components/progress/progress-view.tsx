@@ -51,8 +51,8 @@ export function ProgressView({ projectId }: { projectId: string }) {
         <div className="flex flex-wrap items-baseline gap-x-6 gap-y-1">
           <h2 className="text-lg font-semibold">Overall</h2>
           <p className="text-sm">
-            <span className="text-xl font-bold tabular-nums">{pct(data.builtPct)}</span> built (terminated or
-            tested)
+            <span className="text-xl font-bold tabular-nums">{pct(data.builtPct)}</span> built (terminated,
+            tested or failed)
           </p>
           <p className="text-sm">
             <span className="text-xl font-bold tabular-nums">{pct(data.testedPct)}</span> tested and passed
@@ -86,7 +86,7 @@ export function ProgressView({ projectId }: { projectId: string }) {
         </h2>
         <ul className="flex flex-col gap-3">
           {data.wireTypes.map((t) => (
-            <li key={t.label} className="grid gap-1 sm:grid-cols-[16rem_1fr_7rem] sm:items-center sm:gap-3">
+            <li key={t.label} className="grid gap-1 sm:grid-cols-[16rem_1fr_10rem] sm:items-center sm:gap-3">
               <span className="flex flex-wrap items-center gap-2 text-sm">
                 <span className="font-semibold">{t.gauge}</span>
                 <ColourSwatch code={t.colour} />

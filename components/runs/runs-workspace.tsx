@@ -56,8 +56,8 @@ const RUN_COLUMNS = [
   { id: "currentA", header: "Current (A)", width: 100, editable: true },
   { id: "fuseA", header: "Fuse (A)", width: 90, editable: true },
   { id: "state", header: "State", width: 110, editable: false },
-  { id: "verdict", header: "Check", width: 90, editable: false },
   { id: "lastTest", header: "Test", width: 150, editable: false },
+  { id: "verdict", header: "Check", width: 90, editable: false },
 ] as const;
 type ColumnId = (typeof RUN_COLUMNS)[number]["id"];
 

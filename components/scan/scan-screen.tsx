@@ -240,8 +240,13 @@ export function ScanScreen() {
 
         {camera.kind === "no-camera" ? (
           <Notice tone="info" title="No camera found">
-            This device has no camera the browser can use. Type the code printed under the barcode below, or
-            use a handheld scanner.
+            <p>
+              This device has no camera the browser can use. Type the code printed under the barcode below, or
+              use a handheld scanner.
+            </p>
+            <Button variant="secondary" size="lg" className="mt-2" onClick={() => void startCamera()}>
+              Look again
+            </Button>
           </Notice>
         ) : null}
         {camera.kind === "insecure" ? (
@@ -326,10 +331,10 @@ export function ScanScreen() {
             autoCapitalize="characters"
             spellCheck={false}
             enterKeyHint="go"
-            placeholder="e.g. 7K3M9Q2X"
+            placeholder="7K3M9Q2X"
             aria-invalid={typedError ? true : undefined}
             aria-describedby={typedError ? "scan-code-error" : "scan-code-hint"}
-            className={`h-14 min-w-0 flex-1 rounded-md border bg-white px-3 font-mono text-xl uppercase tracking-wider ${typedError ? "border-fail" : "border-line-strong"}`}
+            className={`h-14 min-w-0 flex-1 rounded-md border bg-white px-3 font-mono text-xl uppercase tracking-wider placeholder:tracking-normal ${typedError ? "border-fail" : "border-line-strong"}`}
           />
           <Button type="submit" size="lg" disabled={lookup.kind === "checking"}>
             Open

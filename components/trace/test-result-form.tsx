@@ -158,7 +158,7 @@ export function TestResultForm(props: {
           <p id={`${id}-value-hint`} className="text-xs text-ink-faint">
             {HINTS[kind]}; leave empty when only pass or fail was noted.
             {kind === "continuity" && props.expectedOhm !== null
-              ? ` The conductor alone should read about ${formatTestValue("continuity", props.expectedOhm)} (from the checks).`
+              ? ` The conductor alone should read about ${Number(props.expectedOhm.toPrecision(2))} Ω (its cut length at 20 °C, from the conductor tables).`
               : ""}
           </p>
           {error ? (

@@ -91,7 +91,12 @@ export function TraceRun({ view, canTest = false }: { view: TraceView; canTest?:
         <p className="text-lg">{run.circuit ?? "No circuit name"}</p>
         <div className="mt-3 flex flex-wrap items-center gap-3">
           <StateBadge state={run.state} />
-          {checks ? <VerdictBadge verdict={checks.verdict} /> : null}
+          {checks ? (
+            // Labelled: the checks' verdict must not be read as a test result.
+            <span className="inline-flex items-center gap-1 text-xs text-paper/80">
+              Checks <VerdictBadge verdict={checks.verdict} />
+            </span>
+          ) : null}
           <span className="rounded bg-white px-2 py-0.5 text-ink">
             <ColourSwatch code={run.colour} />
           </span>

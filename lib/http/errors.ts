@@ -36,6 +36,8 @@ const DB_DOWN_CODES = new Set([
   "ECONNREFUSED",
   "ECONNRESET",
   "ETIMEDOUT",
+  "EPIPE",
+  "08003",
   "57P01",
   "57P02",
   "57P03",
@@ -47,7 +49,10 @@ function isDbDown(e: unknown): boolean {
   if (!(e instanceof Error)) return false;
   const code = (e as PgLikeError).code;
   if (typeof code === "string" && DB_DOWN_CODES.has(code)) return true;
-  return /Connection terminated|Knex: Timeout acquiring a connection|connect ECONNREFUSED|timeout exceeded when trying to connect/i.test(
+  // A session cut while the server stops: pg refuses further queries on that client ("not queryable"), also for the
+  // COMMIT or ROLLBACK of a transaction it was in, whose outcome the caller then cannot know (a retry with the same
+  // version tells: 409 if it was committed).
+  return /Connection terminated|Connection ended unexpectedly|not queryable|Knex: Timeout acquiring a connection|connect ECONNREFUSED|timeout exceeded when trying to connect|the database system is (shutting down|starting up)/i.test(
     e.message,
   );
 }

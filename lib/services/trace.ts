@@ -1,9 +1,7 @@
 // What a scanned marker opens: the run behind a trace code, with its checks, tests, history and neighbours.
-import { db } from "@/lib/db/knex";
-import { listEntityEvents, type AuditEventView } from "@/lib/db/audit";
-import { runsOnDevices, type RunRecord } from "@/lib/db/runs";
-import { findTraceRun, runsLinkedByReturn, type TraceRunRow } from "@/lib/db/trace";
-import { listRunTests, type RunTestRecord } from "@/lib/db/run-tests";
+import type { AuditEventView } from "@/lib/db/audit";
+import { findTraceRun, traceRest, type RelatedRun, type TraceRunRow } from "@/lib/db/trace";
+import type { RunTestRecord } from "@/lib/db/run-tests";
 import { normaliseTraceCode } from "@/lib/domain/trace-code";
 import { runCutLengthMm } from "@/lib/domain/cut-length";
 import { notFound } from "@/lib/http/errors";
@@ -11,7 +9,7 @@ import { checksOfRunWith, checksView, type RunChecksView } from "@/lib/services/
 import type { RunView } from "@/lib/services/runs";
 import { traceCut, type TraceCutView } from "@/lib/services/bench";
 
-export type RelatedRun = Pick<RunRecord, "id" | "wireId" | "endA" | "endB" | "circuit" | "traceCode">;
+export type { RelatedRun };
 
 export interface TraceView {
   run: RunView;
@@ -28,7 +26,7 @@ export interface TraceView {
 const device = (ref: string) => ref.split(":")[0]!.trim();
 
 // Views already built, per team and code, with the project row version they were built from. Each scan reads the
-// run and that version in one query; only when the project changed is the rest read again (four reads at once).
+// run and that version in one query; only when the project changed is the rest read again (in one more query).
 const CACHE_MAX = 1000;
 const cache = new Map<string, { stamp: string; view: TraceView }>();
 
@@ -56,11 +54,8 @@ async function buildTraceView(teamId: string, head: TraceRunRow): Promise<TraceV
   const { run, settings } = head;
   const devices = [...new Set([device(run.endA), device(run.endB)])];
   // The checks read only the runs this run's checks depend on: the same result as the whole project's checks.
-  const [linked, related, tests, history, cut] = await Promise.all([
-    runsLinkedByReturn(teamId, run.projectId, run),
-    runsOnDevices(teamId, run.projectId, devices, run.id),
-    listRunTests(teamId, run.id, db(), 100),
-    listEntityEvents(db(), teamId, "run", run.id),
+  const [{ linked, related, tests, history }, cut] = await Promise.all([
+    traceRest(teamId, run, devices),
     traceCut(teamId, run.id),
   ]);
   const runChecks = checksOfRunWith(run, linked, settings);

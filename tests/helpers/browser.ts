@@ -22,7 +22,7 @@ export interface Browser {
 }
 
 export async function openBrowser(
-  opts: { viewport?: { width: number; height: number } } = {},
+  opts: { viewport?: { width: number; height: number }; args?: string[] } = {},
 ): Promise<Browser> {
   const dir = mkdtempSync(path.join(os.tmpdir(), "loomwright-chromium-"));
   const context = await chromium.launchPersistentContext(dir, {
@@ -37,6 +37,7 @@ export async function openBrowser(
       "--disable-background-networking",
       "--disable-component-update",
       "--disable-sync",
+      ...(opts.args ?? []),
     ],
   });
   const page = context.pages()[0] ?? (await context.newPage());

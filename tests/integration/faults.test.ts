@@ -80,24 +80,33 @@ describe("the database stops and starts during a session", () => {
     });
     expect(tested.status).toBe(200);
 
-    // A writer keeps changing runs 1–5 through the outage; every change it is told succeeded must survive.
+    // Writers keep changing runs 1–5 through the outage; every change they are told succeeded must survive.
     const acked = new Map<string, { version: number; state: string }>();
     const unexpected: string[] = [];
+    const seen: Record<string, number> = {};
+    const count = (what: string) => (seen[what] = (seen[what] ?? 0) + 1);
     const writeOnce = async (run: Run) => {
       const got = await lead.get<Run>(runUrl(run));
-      if (got.status === 503) return new Promise((r) => setTimeout(r, 50));
+      if (got.status === 503) {
+        count("GET 503");
+        return new Promise((r) => setTimeout(r, 50));
+      }
       if (got.status !== 200) return unexpected.push(`GET ${got.status}`);
       const state = got.body.state === "cut" ? "marked" : "cut";
       const r = await lead.patch<Run>(runUrl(run), { version: got.body.version, state });
+      count(`PATCH ${r.status}`);
       if (r.status === 200) acked.set(run.id, { version: r.body.version, state: r.body.state });
       else if (r.status !== 503 && r.status !== 409) unexpected.push(`PATCH ${r.status}`);
     };
     let writing = true;
-    const writer = (async () => {
-      for (let i = 0; writing; i++) {
-        await writeOnce(runs[1 + (i % 5)]!).catch((e: unknown) => unexpected.push(`network: ${String(e)}`));
-      }
-    })();
+    // One writer per run, all at once, so transactions are in flight when the server stops.
+    const writer = Promise.all(
+      runs.slice(1).map(async (run) => {
+        while (writing) {
+          await writeOnce(run).catch((e: unknown) => unexpected.push(`network: ${String(e)}`));
+        }
+      }),
+    );
 
     let recoveredMs = -1;
     try {
@@ -177,6 +186,7 @@ describe("the database stops and starts during a session", () => {
     const t = await tech.get<{ run: Run; tests: { passed: boolean; value: number }[] }>(
       `/api/trace/${runs[0]!.traceCode}`,
     );
+    expect(t.status, JSON.stringify(t.body)).toBe(200);
     expect(t.body.run).toMatchObject({ state: "tested", version: 2 });
     expect(t.body.tests).toEqual([expect.objectContaining({ passed: true, value: 0.025 })]);
     for (const [id, a] of acked) {
@@ -187,6 +197,6 @@ describe("the database stops and starts during a session", () => {
       // One audit event per committed change, also for changes whose answer was lost in the outage.
       expect(trace.body.history.length).toBe(r.version);
     }
-    console.log(`faults: API answered again ${recoveredMs} ms after PostgreSQL was back`);
+    console.log(`faults: API answered again ${recoveredMs} ms after PostgreSQL was back; writers saw`, seen);
   }, 120_000);
 });

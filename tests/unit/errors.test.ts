@@ -40,6 +40,16 @@ describe("mapError", () => {
     expect(mapError(e).status).toBe(409);
   });
 
+  it.each([
+    "COMMIT; - Client has encountered a connection error and is not queryable",
+    "ROLLBACK - Client has encountered a connection error and is not queryable",
+    "Connection ended unexpectedly",
+  ])("maps a session cut by a stopping database to 503: %s", (message) => {
+    const m = mapError(new Error(message));
+    expect(m.status).toBe(503);
+    expect(m.body.error.code).toBe("db_unavailable");
+  });
+
   it("maps an unreachable database to 503 with Retry-After", () => {
     const e = Object.assign(new Error("connect ECONNREFUSED 127.0.0.1:54329"), { code: "ECONNREFUSED" });
     const m = mapError(e);
