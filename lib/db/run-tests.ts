@@ -53,26 +53,6 @@ export async function insertRunTest(tx: Tx, row: RunTestInsert): Promise<number>
   return r.id;
 }
 
-export async function getRunTest(teamId: string, id: number, q: Db = db()): Promise<RunTestRecord | null> {
-  const row = (await scoped(q, teamId).where("t.id", id).select(COLUMNS).first()) as
-    RunTestRecord | undefined;
-  return row ?? null;
-}
-
-/** A run's results, newest first. */
-export async function listRunTests(
-  teamId: string,
-  runId: string,
-  q: Db = db(),
-  limit = 200,
-): Promise<RunTestRecord[]> {
-  return (await scoped(q, teamId)
-    .where("t.runId", runId)
-    .orderBy("t.id", "desc")
-    .limit(limit)
-    .select(COLUMNS)) as RunTestRecord[];
-}
-
 /** The newest result of each of the given runs (runs without one are absent from the map). */
 export async function latestRunTests(
   teamId: string,
