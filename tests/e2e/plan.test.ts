@@ -22,7 +22,14 @@ describe("the Spool plan screen", () => {
     const summary = page.getByRole("region", { name: "Plan summary" });
     await summary.waitFor({ timeout: 30_000 });
     expect(await summary.innerText()).toMatch(/Proven lower bound/i);
-    expect(await page.getByRole("img", { name: /cuts, \d+ mm used of/ }).count()).toBeGreaterThan(5);
+    // The new plan's spools are drawn once it has loaded (another test's plan may show first).
+    const bars = page.getByRole("img", { name: /cuts, \d+ mm used of/ });
+    await page.waitForFunction(
+      () => document.querySelectorAll('[role="img"][aria-label*="mm used of"]').length > 5,
+      undefined,
+      { timeout: 30_000 },
+    );
+    expect(await bars.count()).toBeGreaterThan(5);
 
     await page.getByRole("button", { name: "Commit plan" }).click();
     await page.getByText(/Committed: the shelf spools are reserved/).waitFor();
