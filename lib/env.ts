@@ -7,7 +7,7 @@ const envSchema = z.object({
   PUBLIC_BASE_URL: z.string().url().default("http://127.0.0.1:3000"),
   COOKIE_SECURE: z.enum(["auto", "0", "1"]).default("auto"),
   SMTP_URL: z.string().default("smtp://127.0.0.1:2525"),
-  MAIL_FROM: z.string().default("Loomwright <no-reply@loomwright.example.test>"),
+  MAIL_FROM: z.string().default("Loomwright <no-reply@example.test>"),
   // Unset: on in development and tests, off under NODE_ENV=production (see mailboxEnabled).
   DEV_MAILBOX: z.preprocess((v) => (v === "" ? undefined : v), z.enum(["0", "1"]).optional()),
 });
