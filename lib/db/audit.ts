@@ -43,21 +43,6 @@ export interface AuditEventView {
   createdAt: string;
 }
 
-/** The history of one record, oldest first. */
-export async function listEntityEvents(
-  q: Db,
-  teamId: string,
-  entityType: string,
-  entityId: string,
-): Promise<AuditEventView[]> {
-  return (await q("auditEvents as e")
-    .leftJoin("appUser as u", "u.id", "e.actorUserId")
-    .where({ "e.teamId": teamId, "e.entityType": entityType, "e.entityId": entityId })
-    .orderBy("e.id", "asc")
-    .limit(500)
-    .select("e.id", "e.action", "u.name as actorName", "e.detail", "e.createdAt")) as AuditEventView[];
-}
-
 export interface AuditEventRecord {
   id: number;
   action: string;

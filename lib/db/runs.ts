@@ -208,43 +208,6 @@ export async function updateRunsEach(
   return out;
 }
 
-/** The run a marker's trace code names, if it belongs to a project of this team. */
-export async function findRunByTraceCode(
-  teamId: string,
-  code: string,
-  q: Db = db(),
-): Promise<(RunRecord & { projectName: string }) | null> {
-  const row = (await q("run as r")
-    .join("project as p", "p.id", "r.projectId")
-    .where({ "p.teamId": teamId, "r.traceCode": code })
-    .select([...RUN_SELECT, "p.name as projectName"])
-    .first()) as (RunRecord & { projectName: string }) | undefined;
-  return row ?? null;
-}
-
-/** Other runs of the project that end on one of the given devices (the part of a reference before ':'). */
-export async function runsOnDevices(
-  teamId: string,
-  projectId: string,
-  devices: string[],
-  exceptRunId: string,
-  q: Db = db(),
-): Promise<Pick<RunRecord, "id" | "wireId" | "endA" | "endB" | "circuit" | "traceCode">[]> {
-  if (devices.length === 0) return [];
-  return (await scoped(q, teamId, projectId)
-    .whereNot("r.id", exceptRunId)
-    .where((w) => {
-      for (const d of devices) {
-        w.orWhereRaw("split_part(r.end_a, ':', 1) = ?", [d]).orWhereRaw("split_part(r.end_b, ':', 1) = ?", [
-          d,
-        ]);
-      }
-    })
-    .select("r.id", "r.wireId", "r.endA", "r.endB", "r.circuit", "r.traceCode")
-    .orderBy("r.wireId")
-    .limit(100)) as Pick<RunRecord, "id" | "wireId" | "endA" | "endB" | "circuit" | "traceCode">[];
-}
-
 /** What changes whenever a run of the project is added, edited or removed: count, sum of versions, last update. */
 export async function runsRevision(
   teamId: string,
